@@ -1,0 +1,60 @@
+package org.statesum.api;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import io.javalin.Javalin;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.util.Map;
+
+/** Builds the statesum HTTP application; {@code App.create(config).start()} serves it. */
+public final class App {
+
+    private static final String OPENAPI_RESOURCE = "/openapi/statesum.yaml";
+
+    private App() {
+    }
+
+    public static Javalin create(ServiceConfig config) {
+        ObjectMapper mapper = JsonSupport.mapper(config);
+        BodyReader bodies = new BodyReader(mapper, config.maxBodyBytes());
+        SpectrumController spectrum = new SpectrumController(bodies, config, mapper);
+        ConstantsController constants;
+        try {
+            constants = new ConstantsController(mapper);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        byte[] openApi = resource(OPENAPI_RESOURCE);
+        byte[] live = "{\"status\":\"up\"}".getBytes(java.nio.charset.StandardCharsets.UTF_8);
+        ProblemMapper problems = new ProblemMapper(mapper);
+        return Javalin.create(javalin -> {
+            javalin.startup.showJavalinBanner = false;
+            javalin.startup.showOldJavalinVersionWarning = false;
+            javalin.jetty.port = config.port();
+            javalin.http.maxRequestSize = config.maxBodyBytes();
+            problems.register(javalin);
+            javalin.routes.post("/v1/spectrum", spectrum::post);
+            javalin.routes.get("/v1/constants", constants::get);
+            javalin.routes.get("/openapi.yaml", ctx -> ctx.contentType("application/yaml").result(openApi));
+            javalin.routes.get("/health/live", ctx -> ctx.contentType("application/json").result(live));
+            javalin.routes.get("/health/ready", ctx -> ctx.contentType("application/json").result(live));
+        });
+    }
+
+    /** Starts the service from environment variables. */
+    public static Javalin start(Map<String, String> environment) {
+        return create(ServiceConfig.fromEnvironment(environment)).start();
+    }
+
+    private static byte[] resource(String name) {
+        try (InputStream in = App.class.getResourceAsStream(name)) {
+            if (in == null) {
+                throw new IllegalStateException("missing resource " + name);
+            }
+            return in.readAllBytes();
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+}

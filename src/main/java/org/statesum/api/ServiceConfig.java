@@ -1,0 +1,84 @@
+package org.statesum.api;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Service settings, read from environment variables prefixed {@code STATESUM_}. Every limit that
+ * protects the service is here, with its default; the README lists them.
+ *
+ * @param port HTTP port ({@code STATESUM_PORT}, 8080; 0 picks a free port)
+ * @param maxBodyBytes largest request body ({@code STATESUM_MAX_BODY_BYTES}, 40 MiB): 413 beyond
+ * @param maxNestingDepth deepest JSON nesting ({@code STATESUM_MAX_NESTING_DEPTH}, 32)
+ * @param maxStringLength longest JSON string ({@code STATESUM_MAX_STRING_LENGTH}, 4096 chars)
+ * @param maxLevels most levels in one level set ({@code STATESUM_MAX_LEVELS}, 2 000 000)
+ * @param maxTemperatures most temperatures in one grid ({@code STATESUM_MAX_TEMPERATURES}, 100 000)
+ * @param computeBudget most (level, temperature) pairs in one job ({@code STATESUM_COMPUTE_BUDGET}, 1e9)
+ * @param maxPopulationCells most (level, temperature) populations returned
+ *        ({@code STATESUM_MAX_POPULATION_CELLS}, 1 000 000)
+ */
+public record ServiceConfig(
+        int port,
+        long maxBodyBytes,
+        int maxNestingDepth,
+        int maxStringLength,
+        int maxLevels,
+        int maxTemperatures,
+        long computeBudget,
+        long maxPopulationCells) {
+
+    public static final String PREFIX = "STATESUM_";
+
+    /** The defaults, on port 8080. */
+    public static ServiceConfig defaults() {
+        return new ServiceConfig(8080, 40L << 20, 32, 4096, 2_000_000, 100_000, 1_000_000_000L, 1_000_000L);
+    }
+
+    /** A copy listening on another port (0 for any free port, as tests use). */
+    public ServiceConfig withPort(int newPort) {
+        return new ServiceConfig(newPort, maxBodyBytes, maxNestingDepth, maxStringLength, maxLevels,
+                maxTemperatures, computeBudget, maxPopulationCells);
+    }
+
+    /**
+     * Reads the settings from an environment map, falling back to the defaults.
+     *
+     * @throws IllegalArgumentException naming every variable that is not a number in its range
+     */
+    public static ServiceConfig fromEnvironment(Map<String, String> env) {
+        ServiceConfig d = defaults();
+        List<String> problems = new ArrayList<>();
+        ServiceConfig config = new ServiceConfig(
+                (int) read(env, "PORT", d.port, 0, 65535, problems),
+                read(env, "MAX_BODY_BYTES", d.maxBodyBytes, 1024, Integer.MAX_VALUE - 8, problems),
+                (int) read(env, "MAX_NESTING_DEPTH", d.maxNestingDepth, 4, 1000, problems),
+                (int) read(env, "MAX_STRING_LENGTH", d.maxStringLength, 64, 1 << 24, problems),
+                (int) read(env, "MAX_LEVELS", d.maxLevels, 1, 50_000_000, problems),
+                (int) read(env, "MAX_TEMPERATURES", d.maxTemperatures, 1, 10_000_000, problems),
+                read(env, "COMPUTE_BUDGET", d.computeBudget, 1, Long.MAX_VALUE / 2, problems),
+                read(env, "MAX_POPULATION_CELLS", d.maxPopulationCells, 0, 100_000_000, problems));
+        if (!problems.isEmpty()) {
+            throw new IllegalArgumentException(String.join("; ", problems));
+        }
+        return config;
+    }
+
+    private static long read(Map<String, String> env, String name, long fallback, long min, long max,
+            List<String> problems) {
+        String raw = env.get(PREFIX + name);
+        if (raw == null || raw.isBlank()) {
+            return fallback;
+        }
+        try {
+            long value = Long.parseLong(raw.trim());
+            if (value >= min && value <= max) {
+                return value;
+            }
+        } catch (NumberFormatException e) {
+            // reported below
+        }
+        problems.add(PREFIX + name + " must be an integer from " + min + " to " + max + ", got '" + raw + "'");
+        return fallback;
+    }
+}

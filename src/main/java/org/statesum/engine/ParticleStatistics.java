@@ -1,0 +1,9 @@
+package org.statesum.engine;
+
+/** How N identical particles are counted when the N-particle partition function is formed. */
+public enum ParticleStatistics {
+    /** Localised particles (sites of a crystal): Z_N = Z_1^N. */
+    DISTINGUISHABLE,
+    /** Particles free to exchange places (a dilute gas): Z_N = Z_1^N / N! (Boltzmann counting). */
+    INDISTINGUISHABLE
+}

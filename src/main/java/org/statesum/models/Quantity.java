@@ -1,0 +1,27 @@
+package org.statesum.models;
+
+/** The thermodynamic quantities a model can report, each with its physical dimension. */
+public enum Quantity {
+    LOG_PARTITION_FUNCTION(Dimension.NONE),
+    HELMHOLTZ_ENERGY(Dimension.ENERGY),
+    INTERNAL_ENERGY(Dimension.ENERGY),
+    ENTROPY(Dimension.ENTROPY),
+    ISOCHORIC_HEAT_CAPACITY(Dimension.ENTROPY),
+    ENTHALPY(Dimension.ENERGY),
+    GIBBS_ENERGY(Dimension.ENERGY),
+    ISOBARIC_HEAT_CAPACITY(Dimension.ENTROPY),
+    ZERO_POINT_ENERGY(Dimension.ENERGY);
+
+    /** Dimensionless, energy (J per entity inside models) or entropy and heat capacity (J/K per entity). */
+    public enum Dimension { NONE, ENERGY, ENTROPY }
+
+    private final Dimension dimension;
+
+    Quantity(Dimension dimension) {
+        this.dimension = dimension;
+    }
+
+    public Dimension dimension() {
+        return dimension;
+    }
+}
