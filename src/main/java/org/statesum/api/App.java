@@ -18,7 +18,8 @@ public final class App {
     public static Javalin create(ServiceConfig config) {
         ObjectMapper mapper = JsonSupport.mapper(config);
         BodyReader bodies = new BodyReader(mapper, config.maxBodyBytes());
-        SpectrumController spectrum = new SpectrumController(bodies, config, mapper);
+        ComputeRoutes compute = new ComputeRoutes()
+                .add("/v1/spectrum", new SpectrumController(config));
         ConstantsController constants;
         try {
             constants = new ConstantsController(mapper);
@@ -34,7 +35,8 @@ public final class App {
             javalin.jetty.port = config.port();
             javalin.http.maxRequestSize = config.maxBodyBytes();
             problems.register(javalin);
-            javalin.routes.post("/v1/spectrum", spectrum::post);
+            compute.all().forEach((path, endpoint) -> javalin.routes.post(path,
+                    ctx -> Responses.json(ctx, mapper, endpoint.answer(bodies.read(ctx)))));
             javalin.routes.get("/v1/constants", constants::get);
             javalin.routes.get("/openapi.yaml", ctx -> ctx.contentType("application/yaml").result(openApi));
             javalin.routes.get("/health/live", ctx -> ctx.contentType("application/json").result(live));

@@ -1,8 +1,6 @@
 package org.statesum.api;
 
-import com.fasterxml.jackson.databind.ObjectMapper;
-import io.javalin.http.Context;
-import java.io.IOException;
+import com.fasterxml.jackson.databind.JsonNode;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import org.statesum.engine.ParticleStatistics;
@@ -10,20 +8,17 @@ import org.statesum.models.LevelSetModel;
 import org.statesum.models.ThermoResult;
 
 /** {@code POST /v1/spectrum}: a discrete level set as N particles, to free energies. */
-final class SpectrumController {
+final class SpectrumController implements ComputeEndpoint {
 
-    private final BodyReader bodies;
     private final SpectrumRequestReader requests;
-    private final ObjectMapper mapper;
 
-    SpectrumController(BodyReader bodies, ServiceConfig config, ObjectMapper mapper) {
-        this.bodies = bodies;
+    SpectrumController(ServiceConfig config) {
         this.requests = new SpectrumRequestReader(config);
-        this.mapper = mapper;
     }
 
-    void post(Context ctx) throws IOException {
-        SpectrumJob job = requests.read(bodies.read(ctx));
+    @Override
+    public Object answer(JsonNode body) {
+        SpectrumJob job = requests.read(body);
         ThermoResult result = LevelSetModel.evaluate(job.levels(), job.temperaturesKelvin(), job.particles(),
                 job.withPopulations());
         Map<String, Object> system = new LinkedHashMap<>();
@@ -31,6 +26,6 @@ final class SpectrumController {
         system.put("statistics", job.particles().statistics() == ParticleStatistics.INDISTINGUISHABLE
                 ? "indistinguishable" : "distinguishable");
         system.put("basis", job.particles().perParticle() ? "per-particle" : "total");
-        Responses.json(ctx, mapper, ThermoResponse.of(result, job.outputUnit(), system));
+        return ThermoResponse.of(result, job.outputUnit(), system);
     }
 }
