@@ -27,26 +27,28 @@ public final class App {
             throw new UncheckedIOException(e);
         }
         byte[] openApi = resource(OPENAPI_RESOURCE);
-        byte[] live = "{\"status\":\"up\"}".getBytes(java.nio.charset.StandardCharsets.UTF_8);
         ProblemMapper problems = new ProblemMapper(mapper);
+        Operations operations = new Operations(config, mapper, bodies, problems);
         return Javalin.create(javalin -> {
             javalin.startup.showJavalinBanner = false;
             javalin.startup.showOldJavalinVersionWarning = false;
             javalin.jetty.port = config.port();
             javalin.http.maxRequestSize = config.maxBodyBytes();
             problems.register(javalin);
-            compute.all().forEach((path, endpoint) -> javalin.routes.post(path,
-                    ctx -> Responses.json(ctx, mapper, endpoint.answer(bodies.read(ctx)))));
+            operations.install(javalin, compute);
             javalin.routes.get("/v1/constants", constants::get);
             javalin.routes.get("/openapi.yaml", ctx -> ctx.contentType("application/yaml").result(openApi));
-            javalin.routes.get("/health/live", ctx -> ctx.contentType("application/json").result(live));
-            javalin.routes.get("/health/ready", ctx -> ctx.contentType("application/json").result(live));
         });
     }
 
-    /** Starts the service from environment variables. */
+    /**
+     * Starts the service from environment variables; SIGTERM (the JVM's shutdown hook) stops it
+     * gracefully: readiness fails, new work is refused, work in flight finishes, then the server stops.
+     */
     public static Javalin start(Map<String, String> environment) {
-        return create(ServiceConfig.fromEnvironment(environment)).start();
+        Javalin app = create(ServiceConfig.fromEnvironment(environment)).start();
+        Runtime.getRuntime().addShutdownHook(new Thread(app::stop, "statesum-shutdown"));
+        return app;
     }
 
     private static byte[] resource(String name) {

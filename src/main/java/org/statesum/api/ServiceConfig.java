@@ -17,6 +17,8 @@ import java.util.Map;
  * @param computeBudget most (level, temperature) pairs in one job ({@code STATESUM_COMPUTE_BUDGET}, 1e9)
  * @param maxPopulationCells most (level, temperature) populations returned
  *        ({@code STATESUM_MAX_POPULATION_CELLS}, 1 000 000)
+ * @param operations overload limits, time limits, batch limits, access control and logging
+ *        ({@link OperationsConfig})
  */
 public record ServiceConfig(
         int port,
@@ -26,9 +28,17 @@ public record ServiceConfig(
         int maxLevels,
         int maxTemperatures,
         long computeBudget,
-        long maxPopulationCells) {
+        long maxPopulationCells,
+        OperationsConfig operations) {
 
     public static final String PREFIX = "STATESUM_";
+
+    /** The settings above with the default operations settings. */
+    public ServiceConfig(int port, long maxBodyBytes, int maxNestingDepth, int maxStringLength, int maxLevels,
+            int maxTemperatures, long computeBudget, long maxPopulationCells) {
+        this(port, maxBodyBytes, maxNestingDepth, maxStringLength, maxLevels, maxTemperatures, computeBudget,
+                maxPopulationCells, OperationsConfig.defaults());
+    }
 
     /** The defaults, on port 8080. */
     public static ServiceConfig defaults() {
@@ -38,7 +48,13 @@ public record ServiceConfig(
     /** A copy listening on another port (0 for any free port, as tests use). */
     public ServiceConfig withPort(int newPort) {
         return new ServiceConfig(newPort, maxBodyBytes, maxNestingDepth, maxStringLength, maxLevels,
-                maxTemperatures, computeBudget, maxPopulationCells);
+                maxTemperatures, computeBudget, maxPopulationCells, operations);
+    }
+
+    /** A copy with other operations settings. */
+    public ServiceConfig withOperations(OperationsConfig newOperations) {
+        return new ServiceConfig(port, maxBodyBytes, maxNestingDepth, maxStringLength, maxLevels,
+                maxTemperatures, computeBudget, maxPopulationCells, newOperations);
     }
 
     /**
@@ -57,14 +73,15 @@ public record ServiceConfig(
                 (int) read(env, "MAX_LEVELS", d.maxLevels, 1, 50_000_000, problems),
                 (int) read(env, "MAX_TEMPERATURES", d.maxTemperatures, 1, 10_000_000, problems),
                 read(env, "COMPUTE_BUDGET", d.computeBudget, 1, Long.MAX_VALUE / 2, problems),
-                read(env, "MAX_POPULATION_CELLS", d.maxPopulationCells, 0, 100_000_000, problems));
+                read(env, "MAX_POPULATION_CELLS", d.maxPopulationCells, 0, 100_000_000, problems),
+                OperationsConfig.fromEnvironment(env, problems));
         if (!problems.isEmpty()) {
             throw new IllegalArgumentException(String.join("; ", problems));
         }
         return config;
     }
 
-    private static long read(Map<String, String> env, String name, long fallback, long min, long max,
+    static long read(Map<String, String> env, String name, long fallback, long min, long max,
             List<String> problems) {
         String raw = env.get(PREFIX + name);
         if (raw == null || raw.isBlank()) {

@@ -47,19 +47,21 @@ public final class CanonicalEnsemble {
         long pairs = (long) count * prepared.size;
         int workers = pairs < PARALLEL_THRESHOLD_PAIRS ? 1
                 : Math.min(count, Runtime.getRuntime().availableProcessors());
+        Runnable stop = Cancellation.current();
         if (workers <= 1) {
-            evaluateRange(prepared, temperaturesKelvin, 0, count, out);
+            evaluateRange(prepared, temperaturesKelvin, 0, count, out, stop);
         } else {
             IntStream.range(0, workers).parallel().forEach(w -> evaluateRange(prepared, temperaturesKelvin,
-                    (int) ((long) count * w / workers), (int) ((long) count * (w + 1) / workers), out));
+                    (int) ((long) count * w / workers), (int) ((long) count * (w + 1) / workers), out, stop));
         }
         return out.toTable(temperaturesKelvin);
     }
 
     private static void evaluateRange(PreparedLevels prepared, double[] temperatures, int from, int to,
-            CanonicalColumns out) {
+            CanonicalColumns out, Runnable stop) {
         CanonicalKernel kernel = new CanonicalKernel(prepared);
         for (int j = from; j < to; j++) {
+            stop.run(); // a cooperative stop between temperatures (time limit, client gone); see Cancellation
             kernel.evaluate(temperatures[j], j, out);
         }
     }

@@ -1,0 +1,168 @@
+package org.statesum.api;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import io.javalin.http.Context;
+import java.io.IOException;
+import java.io.OutputStream;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.CancellationException;
+import java.util.concurrent.CompletionService;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorCompletionService;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Future;
+import java.util.concurrent.atomic.AtomicBoolean;
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
+import org.statesum.engine.DomainException;
+
+/**
+ * {@code POST /v1/batch}: runs every job through the compute endpoint registered at its path and streams
+ * the answers as NDJSON, one line a job in the order the jobs finish: {@code {id, status, result}} or
+ * {@code {id, status, problem}}. At most {@code STATESUM_BATCH_PARALLELISM} jobs of one batch run at
+ * once, each in a compute slot shared with direct requests and under the job time limit, the whole batch
+ * under the batch time limit. When a line cannot be written (the client has gone), the jobs running are
+ * stopped at their next checkpoint and the rest are never started.
+ */
+final class BatchController {
+
+    static final String MEDIA_TYPE = "application/x-ndjson";
+    private static final Logger LOG = LoggerFactory.getLogger(BatchController.class);
+
+    private final ObjectMapper mapper;
+    private final BodyReader bodies;
+    private final BatchRequestReader requests;
+    private final ComputeGate gate;
+    private final JobRunner runner;
+    private final ExecutorService workers;
+    private final ServiceMetrics metrics;
+    private final OperationsConfig ops;
+
+    BatchController(ObjectMapper mapper, BodyReader bodies, BatchRequestReader requests, ComputeGate gate,
+            JobRunner runner, ExecutorService workers, ServiceMetrics metrics, OperationsConfig ops) {
+        this.mapper = mapper;
+        this.bodies = bodies;
+        this.requests = requests;
+        this.gate = gate;
+        this.runner = runner;
+        this.workers = workers;
+        this.metrics = metrics;
+        this.ops = ops;
+    }
+
+    void post(Context ctx) throws InterruptedException {
+        try (ComputeGate.Ticket ticket = gate.admit()) {
+            List<BatchJob> jobs = requests.read(bodies.read(ctx));
+            long deadline = System.nanoTime() + ops.batchTimeLimitMillis() * 1_000_000L;
+            ctx.status(200).contentType(MEDIA_TYPE);
+            stream(ctx, jobs, ticket, deadline);
+        }
+    }
+
+    private void stream(Context ctx, List<BatchJob> jobs, ComputeGate.Ticket ticket, long deadline)
+            throws InterruptedException {
+        AtomicBoolean gone = new AtomicBoolean();
+        CompletionService<byte[]> done = new ExecutorCompletionService<>(workers);
+        List<Future<byte[]>> pending = new ArrayList<>();
+        int next = 0;
+        OutputStream out;
+        try {
+            out = ctx.res().getOutputStream();
+        } catch (IOException e) {
+            return;
+        }
+        while (next < jobs.size() && pending.size() < ops.batchParallelism()) {
+            BatchJob job = jobs.get(next++);
+            pending.add(done.submit(() -> line(job, ticket, deadline, gone)));
+        }
+        while (!pending.isEmpty()) {
+            Future<byte[]> finished = done.take();
+            pending.remove(finished);
+            byte[] line;
+            try {
+                line = finished.get();
+            } catch (ExecutionException | CancellationException e) {
+                continue; // only a job cancelled after the client left ends this way
+            }
+            try {
+                out.write(line);
+                out.flush();
+            } catch (IOException e) {
+                gone.set(true);
+                break;
+            }
+            if (next < jobs.size()) {
+                BatchJob job = jobs.get(next++);
+                pending.add(done.submit(() -> line(job, ticket, deadline, gone)));
+            }
+        }
+        if (gone.get()) {
+            pending.forEach(f -> f.cancel(true));
+            for (int i = next; i < jobs.size(); i++) {
+                metrics.batchJob("cancelled");
+            }
+            LOG.info("batch client gone: {} of {} jobs never started", jobs.size() - next, jobs.size());
+        }
+    }
+
+    /** Computes one job and renders its line; throws CancellationException if the client has gone. */
+    private byte[] line(BatchJob job, ComputeGate.Ticket ticket, long deadline, AtomicBoolean gone)
+            throws IOException, InterruptedException {
+        if (gone.get()) {
+            metrics.batchJob("cancelled");
+            throw new CancellationException();
+        }
+        Map<String, Object> line = new LinkedHashMap<>();
+        line.put("id", job.id());
+        try {
+            if (job.endpoint() == null) {
+                throw new ProblemException(Problem.of("not-found", "Not found", 404, "no compute endpoint at path '"
+                        + job.path() + "'; see /openapi.yaml", List.of(new FieldError("/path", "unknown path"))));
+            }
+            if (job.body() == null) {
+                throw ProblemException.invalid(List.of(new FieldError("", "is required: the job's request body")));
+            }
+            try (ComputeGate.Slot slot = ticket.slot()) {
+                Object result = runner.run(job.path(), job.endpoint(), job.body(), deadline, gone::get);
+                line.put("status", 200);
+                line.put("result", result);
+            }
+            metrics.batchJob("answered");
+        } catch (CancellationException | InterruptedException e) {
+            metrics.batchJob("cancelled");
+            throw e instanceof CancellationException c ? c : new CancellationException();
+        } catch (RuntimeException e) {
+            Problem problem = problemOf(e);
+            line.put("status", problem.status());
+            line.put("problem", problem);
+            metrics.batchJob("failed");
+        }
+        byte[] json = mapper.writeValueAsBytes(line);
+        byte[] withNewline = new byte[json.length + 1];
+        System.arraycopy(json, 0, withNewline, 0, json.length);
+        withNewline[json.length] = '\n';
+        return withNewline;
+    }
+
+    /** The problem of a failed job, its pointers relative to the job object ("/body/levels/..."). */
+    private static Problem problemOf(RuntimeException e) {
+        if (e instanceof ProblemException p) {
+            Problem problem = p.problem();
+            if (problem.type().endsWith("/not-found")) {
+                return problem;
+            }
+            List<FieldError> errors = problem.errors().stream()
+                    .map(f -> new FieldError("/body" + f.pointer(), f.message())).toList();
+            return new Problem(problem.type(), problem.title(), problem.status(), problem.detail(), errors);
+        }
+        if (e instanceof DomainException d) {
+            return Problem.of("invalid-request", "Invalid request", 422, d.getMessage(),
+                    List.of(new FieldError("/body" + d.field(), d.getMessage())));
+        }
+        LOG.error("batch job failed unexpectedly", e);
+        return ProblemMapper.fromStatus(500);
+    }
+}

@@ -1,0 +1,123 @@
+package org.statesum.api;
+
+import java.util.List;
+import java.util.concurrent.Semaphore;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.atomic.AtomicInteger;
+
+/**
+ * Admission and concurrency control for compute work. A request is first admitted (at most
+ * {@code maxConcurrentJobs + maxQueuedRequests} at once, else 503 at once: no unbounded queue, and
+ * memory bounded by that many bodies), then waits for one of {@code maxConcurrentJobs} compute slots,
+ * in arrival order, for at most {@code queueWaitMillis} (else 503). Batch jobs take compute slots from
+ * the same pool, so direct and batch work share one bound. Once closed for shutdown, the gate admits
+ * nothing more and the work in flight finishes.
+ */
+final class ComputeGate {
+
+    private final OperationsConfig ops;
+    private final ServiceMetrics metrics;
+    private final Semaphore admissions;
+    private final Semaphore slots;
+    private final AtomicInteger admitted = new AtomicInteger();
+    private final AtomicInteger running = new AtomicInteger();
+    private volatile boolean closed;
+
+    ComputeGate(OperationsConfig ops, ServiceMetrics metrics) {
+        this.ops = ops;
+        this.metrics = metrics;
+        this.admissions = new Semaphore(ops.maxConcurrentJobs() + ops.maxQueuedRequests());
+        this.slots = new Semaphore(ops.maxConcurrentJobs(), true);
+        metrics.gauge("statesum.compute.running", "compute jobs running", running::get);
+        metrics.gauge("statesum.compute.admitted", "requests admitted to compute, running or waiting",
+                admitted::get);
+        metrics.gauge("statesum.compute.slots", "compute slots (the concurrency limit)", ops::maxConcurrentJobs);
+    }
+
+    /** Admits one request or throws a 503 problem; the caller closes the ticket when done. */
+    Ticket admit() {
+        if (closed) {
+            throw refused("shutting-down", "the service is shutting down; send the request to another replica");
+        }
+        if (!admissions.tryAcquire()) {
+            throw refused("overloaded", "the service is at its limit of " + ops.maxConcurrentJobs()
+                    + " running and " + ops.maxQueuedRequests() + " waiting requests (STATESUM_MAX_CONCURRENT_JOBS, "
+                    + "STATESUM_MAX_QUEUED_REQUESTS); try again later");
+        }
+        admitted.incrementAndGet();
+        return new Ticket();
+    }
+
+    /** Work admitted and not yet finished. */
+    int admitted() {
+        return admitted.get();
+    }
+
+    /** Refuses all new work from now on (graceful shutdown). */
+    void close() {
+        closed = true;
+    }
+
+    boolean closed() {
+        return closed;
+    }
+
+    private OverloadedException refused(String reason, String detail) {
+        metrics.rejected(reason);
+        return new OverloadedException(Problem.of(reason, reason.equals("overloaded") ? "Service overloaded"
+                : "Service shutting down", 503, detail, List.of()), ops.retryAfterSeconds());
+    }
+
+    /** One admitted request: holds its admission until closed; takes compute slots for its jobs. */
+    final class Ticket implements AutoCloseable {
+
+        private boolean open = true;
+
+        /** Waits for a compute slot up to the queue wait (a direct request), else throws a 503 problem. */
+        Slot slotOrRefuse() {
+            try {
+                if (slots.tryAcquire(ops.queueWaitMillis(), TimeUnit.MILLISECONDS)) {
+                    return new Slot();
+                }
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+            }
+            throw refused("overloaded", "no compute slot became free within " + ops.queueWaitMillis()
+                    + " ms (STATESUM_QUEUE_WAIT_MS); try again later");
+        }
+
+        /** Waits for a compute slot without a limit (a job of an admitted batch). */
+        Slot slot() throws InterruptedException {
+            slots.acquire();
+            return new Slot();
+        }
+
+        @Override
+        public void close() {
+            if (open) {
+                open = false;
+                admitted.decrementAndGet();
+                admissions.release();
+            }
+        }
+    }
+
+    /** One compute slot, held while a job computes. */
+    final class Slot implements AutoCloseable {
+
+        private boolean held = true;
+
+        private Slot() {
+            running.incrementAndGet();
+        }
+
+        @Override
+        public void close() {
+            if (held) {
+                held = false;
+                running.decrementAndGet();
+                slots.release();
+            }
+        }
+    }
+}

@@ -1,0 +1,104 @@
+package org.statesum.api;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import io.javalin.Javalin;
+import io.javalin.config.JavalinConfig;
+import io.javalin.config.Key;
+import io.javalin.http.Context;
+import jakarta.servlet.DispatcherType;
+import java.io.IOException;
+import java.util.EnumSet;
+import java.util.Set;
+import java.util.concurrent.ConcurrentHashMap;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.atomic.AtomicInteger;
+import org.eclipse.jetty.ee10.servlet.FilterHolder;
+
+/**
+ * Everything that lets the service run unattended, installed into the Javalin configuration in one
+ * call: the request observer (request ids, security headers, metrics, access log), access control
+ * (CORS, bearer tokens), overload protection and time limits around every compute route, the batch
+ * route, {@code GET /metrics}, the probes and graceful shutdown.
+ */
+final class Operations {
+
+    static final String METRICS_MEDIA_TYPE = "text/plain; version=0.0.4; charset=utf-8";
+    private static final Key<ComputeRoutes> COMPUTE_ROUTES = new Key<>("statesum.compute-routes");
+
+    private final ObjectMapper mapper;
+    private final BodyReader bodies;
+    private final ProblemMapper problems;
+    private final OperationsConfig ops;
+    private final ServiceMetrics metrics = new ServiceMetrics();
+    private final Set<String> routes = ConcurrentHashMap.newKeySet();
+    private final ComputeGate gate;
+    private final JobRunner runner;
+    private final Lifecycle lifecycle;
+
+    Operations(ServiceConfig config, ObjectMapper mapper, BodyReader bodies, ProblemMapper problems) {
+        this.mapper = mapper;
+        this.bodies = bodies;
+        this.problems = problems;
+        this.ops = config.operations();
+        this.gate = new ComputeGate(ops, metrics);
+        this.runner = new JobRunner(ops, metrics);
+        this.lifecycle = new Lifecycle(gate, ops);
+    }
+
+    /** Installs the operations features and serves every compute route of {@code compute} through them. */
+    void install(JavalinConfig javalin, ComputeRoutes compute) {
+        javalin.appData(COMPUTE_ROUTES, compute);
+        javalin.events.handlerAdded(handler -> {
+            if (!handler.getPath().contains("*") && !handler.getPath().contains("{")) {
+                routes.add(handler.getPath());
+            }
+        });
+        RequestObserver observer = new RequestObserver(metrics, routes, ops.accessLog());
+        javalin.jetty.modifyServletContextHandler(context -> context.addFilter(new FilterHolder(observer), "/*",
+                EnumSet.of(DispatcherType.REQUEST)));
+        javalin.routes.exception(OverloadedException.class, (e, ctx) -> {
+            ctx.header("Retry-After", String.valueOf(e.retryAfterSeconds()));
+            problems.write(ctx, e.problem());
+        });
+        AccessControl access = new AccessControl(ops, metrics);
+        javalin.routes.before(access::before);
+        compute.all().forEach((path, endpoint) -> javalin.routes.post(path, ctx -> direct(ctx, path, endpoint)));
+        ExecutorService workers = Executors.newFixedThreadPool(ops.maxConcurrentJobs(), daemonThreads());
+        BatchController batch = new BatchController(mapper, bodies,
+                new BatchRequestReader(compute, ops.maxBatchJobs()), gate, runner, workers, metrics, ops);
+        javalin.routes.post("/v1/batch", batch::post);
+        javalin.routes.get("/metrics", ctx -> ctx.contentType(METRICS_MEDIA_TYPE).result(metrics.scrape()));
+        javalin.routes.get("/health/live", lifecycle::live);
+        javalin.routes.get("/health/ready", lifecycle::ready);
+        javalin.events.serverStopping(lifecycle::drain);
+        javalin.events.serverStopped(workers::shutdownNow);
+    }
+
+    /** One compute request: admitted or 503, body read, a compute slot or 503, computed under the time limit. */
+    private void direct(Context ctx, String path, ComputeEndpoint endpoint) throws IOException {
+        try (ComputeGate.Ticket ticket = gate.admit()) {
+            JsonNode body = bodies.read(ctx);
+            Object answer;
+            try (ComputeGate.Slot slot = ticket.slotOrRefuse()) {
+                answer = runner.run(path, endpoint, body, JobRunner.noOuterDeadline(), () -> false);
+            }
+            Responses.json(ctx, mapper, answer);
+        }
+    }
+
+    /** The paths of every compute endpoint an application serves (for tests that must cover them all). */
+    static Set<String> computePaths(Javalin app) {
+        return app.unsafe.appDataManager.get(COMPUTE_ROUTES).all().keySet();
+    }
+
+    private static java.util.concurrent.ThreadFactory daemonThreads() {
+        AtomicInteger count = new AtomicInteger();
+        return task -> {
+            Thread thread = new Thread(task, "statesum-batch-" + count.incrementAndGet());
+            thread.setDaemon(true);
+            return thread;
+        };
+    }
+}

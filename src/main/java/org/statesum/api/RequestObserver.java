@@ -1,0 +1,75 @@
+package org.statesum.api;
+
+import jakarta.servlet.Filter;
+import jakarta.servlet.FilterChain;
+import jakarta.servlet.ServletException;
+import jakarta.servlet.ServletRequest;
+import jakarta.servlet.ServletResponse;
+import jakarta.servlet.http.HttpServletRequest;
+import jakarta.servlet.http.HttpServletResponse;
+import java.io.IOException;
+import java.util.Set;
+import java.util.concurrent.ThreadLocalRandom;
+import java.util.regex.Pattern;
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
+
+/**
+ * Wraps every request, whatever its route or outcome: gives it a request id (an incoming
+ * {@code X-Request-Id} of 1 to 128 characters of {@code A-Za-z0-9._:-}, else 32 random hex digits),
+ * echoes the id, sets the security headers, counts it in flight, and afterwards records its latency by
+ * route, method and status and writes one access-log line (logger {@code statesum.access}).
+ */
+final class RequestObserver implements Filter {
+
+    static final String REQUEST_ID = "X-Request-Id";
+    private static final Logger ACCESS = LoggerFactory.getLogger("statesum.access");
+    private static final Pattern SAFE_ID = Pattern.compile("[A-Za-z0-9._:-]{1,128}");
+
+    private final ServiceMetrics metrics;
+    private final Set<String> routes;
+    private final boolean accessLog;
+
+    /**
+     * @param routes the registered paths (a live view): any other path is logged and measured as
+     *        {@code unmatched}
+     */
+    RequestObserver(ServiceMetrics metrics, Set<String> routes, boolean accessLog) {
+        this.metrics = metrics;
+        this.routes = routes;
+        this.accessLog = accessLog;
+    }
+
+    @Override
+    public void doFilter(ServletRequest request, ServletResponse response, FilterChain chain)
+            throws IOException, ServletException {
+        HttpServletRequest req = (HttpServletRequest) request;
+        HttpServletResponse res = (HttpServletResponse) response;
+        long start = System.nanoTime();
+        String incoming = req.getHeader(REQUEST_ID);
+        String id = incoming != null && SAFE_ID.matcher(incoming).matches() ? incoming : newId();
+        res.setHeader(REQUEST_ID, id);
+        SecurityHeaders.apply(res);
+        metrics.inFlight().incrementAndGet();
+        try {
+            chain.doFilter(request, response);
+        } finally {
+            metrics.inFlight().decrementAndGet();
+            long nanos = System.nanoTime() - start;
+            String path = req.getRequestURI();
+            String route = routes.contains(path) ? path : "unmatched";
+            int status = res.getStatus();
+            metrics.request(req.getMethod(), route, status, nanos);
+            if (accessLog) {
+                ACCESS.info("id={} method={} path={} status={} ms={} bytesIn={} client={}", id, req.getMethod(),
+                        path.length() > 200 ? path.substring(0, 200) + "..." : path, status, String.format("%.3f", nanos / 1e6),
+                        Math.max(0, req.getContentLengthLong()), req.getRemoteAddr());
+            }
+        }
+    }
+
+    private static String newId() {
+        ThreadLocalRandom random = ThreadLocalRandom.current();
+        return String.format("%016x%016x", random.nextLong(), random.nextLong());
+    }
+}
