@@ -3,6 +3,7 @@ package org.statesum.api;
 import io.javalin.http.Context;
 import java.nio.charset.StandardCharsets;
 import java.util.List;
+import java.util.concurrent.atomic.AtomicInteger;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 
@@ -21,11 +22,14 @@ final class Lifecycle {
     private static final long POLL_MILLIS = 20;
 
     private final ComputeGate gate;
+    private final AtomicInteger requestsInFlight;
     private final long graceMillis;
     private final int retryAfterSeconds;
 
-    Lifecycle(ComputeGate gate, OperationsConfig ops) {
+    /** @param requestsInFlight HTTP requests not yet fully answered (the drain waits for them too) */
+    Lifecycle(ComputeGate gate, AtomicInteger requestsInFlight, OperationsConfig ops) {
         this.gate = gate;
+        this.requestsInFlight = requestsInFlight;
         this.graceMillis = ops.shutdownGraceMillis();
         this.retryAfterSeconds = ops.retryAfterSeconds();
     }
@@ -42,11 +46,15 @@ final class Lifecycle {
         ctx.contentType("application/json").result(UP);
     }
 
+    private boolean busy() {
+        return gate.admitted() > 0 || requestsInFlight.get() > 0;
+    }
+
     /** Closes the gate and waits for the admitted work to finish, at most the grace period. */
     void drain() {
         gate.close();
         long deadline = System.nanoTime() + graceMillis * 1_000_000L;
-        while (gate.admitted() > 0 && System.nanoTime() - deadline < 0) {
+        while (busy() && System.nanoTime() - deadline < 0) {
             try {
                 Thread.sleep(POLL_MILLIS);
             } catch (InterruptedException e) {
@@ -54,8 +62,8 @@ final class Lifecycle {
                 break;
             }
         }
-        if (gate.admitted() > 0) {
-            LOG.warn("stopping with {} requests still in flight after the grace period", gate.admitted());
+        if (busy()) {
+            LOG.warn("stopping with {} requests still in flight after the grace period", requestsInFlight.get());
         } else {
             LOG.info("drained; stopping");
         }

@@ -44,7 +44,7 @@ final class Operations {
         this.ops = config.operations();
         this.gate = new ComputeGate(ops, metrics);
         this.runner = new JobRunner(ops, metrics);
-        this.lifecycle = new Lifecycle(gate, ops);
+        this.lifecycle = new Lifecycle(gate, metrics.inFlight(), ops);
     }
 
     /** Installs the operations features and serves every compute route of {@code compute} through them. */

@@ -1,5 +1,7 @@
 package org.statesum.api;
 
+import jakarta.servlet.AsyncEvent;
+import jakarta.servlet.AsyncListener;
 import jakarta.servlet.Filter;
 import jakarta.servlet.FilterChain;
 import jakarta.servlet.ServletException;
@@ -10,6 +12,7 @@ import jakarta.servlet.http.HttpServletResponse;
 import java.io.IOException;
 import java.util.Set;
 import java.util.concurrent.ThreadLocalRandom;
+import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.regex.Pattern;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
@@ -51,20 +54,70 @@ final class RequestObserver implements Filter {
         res.setHeader(REQUEST_ID, id);
         SecurityHeaders.apply(res);
         metrics.inFlight().incrementAndGet();
+        boolean async = false;
         try {
             chain.doFilter(request, response);
-        } finally {
-            metrics.inFlight().decrementAndGet();
-            long nanos = System.nanoTime() - start;
-            String path = req.getRequestURI();
-            String route = routes.contains(path) ? path : "unmatched";
-            int status = res.getStatus();
-            metrics.request(req.getMethod(), route, status, nanos);
-            if (accessLog) {
-                ACCESS.info("id={} method={} path={} status={} ms={} bytesIn={} client={}", id, req.getMethod(),
-                        path.length() > 200 ? path.substring(0, 200) + "..." : path, status, String.format("%.3f", nanos / 1e6),
-                        Math.max(0, req.getContentLengthLong()), req.getRemoteAddr());
+            if (req.isAsyncStarted()) {
+                // Javalin may finish writing a large answer asynchronously: count the request until then
+                req.getAsyncContext().addListener(new Finish(() -> finish(req, res, id, start)));
+                async = true;
             }
+        } finally {
+            if (!async) {
+                finish(req, res, id, start);
+            }
+        }
+    }
+
+    private void finish(HttpServletRequest req, HttpServletResponse res, String id, long start) {
+        metrics.inFlight().decrementAndGet();
+        long nanos = System.nanoTime() - start;
+        String path = req.getRequestURI();
+        String route = routes.contains(path) ? path : "unmatched";
+        int status = res.getStatus();
+        metrics.request(req.getMethod(), route, status, nanos);
+        if (accessLog) {
+            ACCESS.info("id={} method={} path={} status={} ms={} bytesIn={} client={}", id, req.getMethod(),
+                    path.length() > 200 ? path.substring(0, 200) + "..." : path, status,
+                    String.format("%.3f", nanos / 1e6), Math.max(0, req.getContentLengthLong()), req.getRemoteAddr());
+        }
+    }
+
+    /** Runs once when an asynchronous answer completes, fails or times out. */
+    private static final class Finish implements AsyncListener {
+
+        private final Runnable action;
+        private final AtomicBoolean done = new AtomicBoolean();
+
+        Finish(Runnable action) {
+            this.action = action;
+        }
+
+        private void once() {
+            if (done.compareAndSet(false, true)) {
+                action.run();
+            }
+        }
+
+        @Override
+        public void onComplete(AsyncEvent event) {
+            once();
+        }
+
+        @Override
+        public void onTimeout(AsyncEvent event) {
+            once();
+        }
+
+        @Override
+        public void onError(AsyncEvent event) {
+            once();
+        }
+
+        @Override
+        public void onStartAsync(AsyncEvent event) {
+            // the same request again: the listener stays registered only if re-added
+            event.getAsyncContext().addListener(this);
         }
     }
 
