@@ -76,7 +76,8 @@ final class ComputeGate {
         /** Waits for a compute slot up to the queue wait (a direct request), else throws a 503 problem. */
         Slot slotOrRefuse() {
             try {
-                if (slots.tryAcquire(ops.queueWaitMillis(), TimeUnit.MILLISECONDS)) {
+                // a free slot is taken at once; only when all are busy does the request queue, in order
+                if (slots.tryAcquire() || slots.tryAcquire(ops.queueWaitMillis(), TimeUnit.MILLISECONDS)) {
                     return new Slot();
                 }
             } catch (InterruptedException e) {

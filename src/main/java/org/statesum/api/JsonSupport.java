@@ -5,6 +5,7 @@ import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.core.StreamReadFeature;
 import com.fasterxml.jackson.core.StreamReadConstraints;
 import com.fasterxml.jackson.core.StreamWriteConstraints;
+import com.fasterxml.jackson.core.StreamWriteFeature;
 import com.fasterxml.jackson.core.json.JsonReadFeature;
 import com.fasterxml.jackson.core.json.JsonWriteFeature;
 import com.fasterxml.jackson.databind.DeserializationFeature;
@@ -39,6 +40,10 @@ public final class JsonSupport {
                 .disable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS)
                 .disable(JsonWriteFeature.WRITE_NAN_AS_STRINGS)
                 .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
+                // Schubfach shortest round-trip output and a correctly rounded parser: the same doubles,
+                // several times faster than Double.toString / parseDouble on Java 17
+                .enable(StreamWriteFeature.USE_FAST_DOUBLE_WRITER)
+                .enable(StreamReadFeature.USE_FAST_DOUBLE_PARSER)
                 .build();
         SimpleModule finiteOnly = new SimpleModule("finite-only");
         finiteOnly.addSerializer(double[].class, new FiniteArraySerializer());

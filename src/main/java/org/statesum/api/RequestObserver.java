@@ -27,6 +27,7 @@ final class RequestObserver implements Filter {
 
     static final String REQUEST_ID = "X-Request-Id";
     private static final Logger ACCESS = LoggerFactory.getLogger("statesum.access");
+    private static final char[] HEX = "0123456789abcdef".toCharArray();
     private static final Pattern SAFE_ID = Pattern.compile("[A-Za-z0-9._:-]{1,128}");
 
     private final ServiceMetrics metrics;
@@ -79,7 +80,7 @@ final class RequestObserver implements Filter {
         if (accessLog) {
             ACCESS.info("id={} method={} path={} status={} ms={} bytesIn={} client={}", id, req.getMethod(),
                     path.length() > 200 ? path.substring(0, 200) + "..." : path, status,
-                    String.format("%.3f", nanos / 1e6), Math.max(0, req.getContentLengthLong()), req.getRemoteAddr());
+                    nanos / 1_000 / 1e3, Math.max(0, req.getContentLengthLong()), req.getRemoteAddr());
         }
     }
 
@@ -123,6 +124,13 @@ final class RequestObserver implements Filter {
 
     private static String newId() {
         ThreadLocalRandom random = ThreadLocalRandom.current();
-        return String.format("%016x%016x", random.nextLong(), random.nextLong());
+        char[] hex = new char[32];
+        for (int half = 0; half < 2; half++) {
+            long bits = random.nextLong();
+            for (int i = 0; i < 16; i++) {
+                hex[half * 16 + i] = HEX[(int) (bits >>> (60 - 4 * i)) & 0xf];
+            }
+        }
+        return new String(hex);
     }
 }

@@ -8,5 +8,8 @@
  * D. J. Higham, N. J. Higham, "Accurately computing the log-sum-exp and softmax functions", IMA J.
  * Numer. Anal. 41 (2021) 2311; two-pass variance as in T. F. Chan, G. H. Golub, R. J. LeVeque,
  * "Algorithms for computing the sample variance", Am. Stat. 37 (1983) 242.
+ *
+ * <p>Long loops stop cooperatively through {@link org.statesum.engine.Cancellation}: a check between
+ * independent units of work, never inside an arithmetic kernel, so a stop never leaves a half-done value.
  */
 package org.statesum.engine;
