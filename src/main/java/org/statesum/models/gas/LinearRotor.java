@@ -54,6 +54,28 @@ public record LinearRotor(double thetaKelvin, int symmetryNumber, boolean levelS
         return mixture;
     }
 
+    /**
+     * How many levels the exact sum visits over the grid (0 for the high-temperature form), for
+     * compute budgets.
+     *
+     * @throws org.statesum.engine.DomainException ROTOR_SUM_TOO_LONG where one temperature needs too many
+     */
+    public long levelCount(double[] temperaturesKelvin) {
+        long count = 0;
+        if (levelSum) {
+            for (double t : temperaturesKelvin) {
+                count += 2L * (highestLevel(t) + 1);
+            }
+        }
+        return count;
+    }
+
+    private int highestLevel(double t) {
+        double even = nuclearSpin == null ? 1.0 / symmetryNumber : nuclearSpin.evenWeight();
+        double odd = nuclearSpin == null ? 1.0 / symmetryNumber : nuclearSpin.oddWeight();
+        return LinearRotorSum.highestLevel(thetaKelvin, even, odd, t);
+    }
+
     private GasPart highTemperature(double[] temperaturesKelvin) {
         GasPart part = GasPart.zero(temperaturesKelvin.length);
         for (int j = 0; j < temperaturesKelvin.length; j++) {
@@ -103,11 +125,9 @@ public record LinearRotor(double thetaKelvin, int symmetryNumber, boolean levelS
                                 ? ", equilibrium modification" : ", frozen mixture, odd-J fraction "
                                         + nuclearSpin.oddFraction());
         precision.put("rotation", "linear rigid rotor, exact level sum to J = rotationHighestLevel; the neglected tail, bounded by the integral test, is below rotationTruncationBound of the kept sum and is included in errorBounds; " + weights);
-        double even = nuclearSpin == null ? 1.0 / symmetryNumber : nuclearSpin.evenWeight();
-        double odd = nuclearSpin == null ? 1.0 / symmetryNumber : nuclearSpin.oddWeight();
         int highest = 0;
         for (double t : temperaturesKelvin) {
-            highest = Math.max(highest, LinearRotorSum.highestLevel(thetaKelvin, even, odd, t));
+            highest = Math.max(highest, highestLevel(t));
         }
         precision.put("rotationHighestLevel", highest);
         precision.put("rotationTruncationBound", LinearRotorSum.TAIL_TARGET);
