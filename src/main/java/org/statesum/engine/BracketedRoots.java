@@ -52,7 +52,9 @@ public final class BracketedRoots {
                 roots.add(new Root(grid[j], 0, rising, 0));
             }
             if (j + 1 < grid.length && values[j] * values[j + 1] < 0) {
-                BrentSolver solver = new BrentSolver(relativeTolerance, absoluteTolerance);
+                // Function-value accuracy 0: only an exact zero ends the search early, whatever the scale of
+                // f (a reaction Gibbs energy per molecule is ~1e-20 J, below the solver's default of 1e-15).
+                BrentSolver solver = new BrentSolver(relativeTolerance, absoluteTolerance, 0);
                 double x = solver.solve(MAX_EVALUATIONS, f::applyAsDouble, grid[j], grid[j + 1]);
                 double tolerance = absoluteTolerance + relativeTolerance * Math.abs(x);
                 roots.add(new Root(x, tolerance, values[j] < 0, solver.getEvaluations()));
