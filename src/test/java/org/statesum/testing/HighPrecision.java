@@ -36,6 +36,16 @@ public final class HighPrecision {
         return sum;
     }
 
+    /** ln a for a > 0, by Newton steps y <- y + 2 (a - e^y) / (a + e^y) from the double logarithm. */
+    public static BigDecimal log(BigDecimal a) {
+        BigDecimal y = new BigDecimal(Math.log(a.doubleValue()));
+        for (int i = 0; i < 4; i++) {
+            BigDecimal ey = exp(y);
+            y = y.add(BigDecimal.valueOf(2).multiply(a.subtract(ey, MC), MC).divide(a.add(ey, MC), MC), MC);
+        }
+        return y;
+    }
+
     /**
      * ln Z' (relative to the lowest level), U / k_B (K) and C_V / k_B of levels E_i / k_B = e[i] (K)
      * with weights g[i], at T (K): {lnZrel, U, Cv} as doubles.

@@ -92,12 +92,17 @@ public final class Vibrations {
             double x = theta / t;
             double rel = (10 + 3 * (x + 1)) * u;
             double em = Math.expm1(x);
-            double energy = theta / 2 + theta / em;
-            double entropy = x / em - Math.log1p(-Math.exp(-x));
+            double thermal = theta / em;
+            double energy = theta / 2 + thermal;
+            double logTerm = logOneMinusExpMinus(x);
+            double entropy = x / em - logTerm;
             double half = x / (2 * Math.sinh(x / 2));
             double heat = half * half;
-            double eBound = rel * energy;
-            double sBound = rel * (x / em + Math.abs(Math.log1p(-Math.exp(-x))));
+            // theta / 2 carries only the rounding of theta; the thermal part the x-amplified one.
+            double eBound = 4 * u * theta / 2 + rel * thermal + 2 * u * energy;
+            // ln(1 - e^-x) to 2 u + u |ln| absolute for x < ln 2 (a relative error d of x moves it by
+            // x d / (e^x - 1) <= d), and to (x + 2) u |e^-x| times 2 above: covered by rel |ln| (plus 8 u below ln 2).
+            double sBound = rel * (x / em + Math.abs(logTerm)) + (x < LN2 ? 8 * u : 0);
             double cBound = rel * heat;
             boolean interpolate = lowFrequency.freeRotorEntropy() || lowFrequency.freeRotorEnergy();
             double w = interpolate ? lowFrequency.weight(nu) : 1;
@@ -130,6 +135,16 @@ public final class Vibrations {
         part.heatCapacity().values()[j] = sumC;
         part.heatCapacity().errorBounds()[j] = bC + n * u * absC;
     }
+
+    /**
+     * ln(1 - e^-x) for x > 0 without cancellation: ln(-expm1(-x)) for x < ln 2, log1p(-e^-x) above
+     * (M. Maechler, "Accurately computing log(1 - exp(-|a|))", R package Rmpfr vignette, 2012).
+     */
+    static double logOneMinusExpMinus(double x) {
+        return x < LN2 ? Math.log(-Math.expm1(-x)) : Math.log1p(-Math.exp(-x));
+    }
+
+    private static final double LN2 = Math.log(2);
 
     /** S_FR / k_B of Grimme's free rotor for wavenumber nu (cm^-1) at T, and its bound. */
     private double[] freeRotorEntropy(double nu, double t) {
