@@ -186,6 +186,18 @@ class IdealGasApiTest {
                 .body("precision.rotation", containsString("frozen mixture, odd-J fraction 0.75"))
                 // Normal H2 at 1000 K: C_V,rot within 2e-4 R of R (see HydrogenRotationTest).
                 .body("contributions.rotational.isochoricHeatCapacity.values[9]", closeTo(8.3145, 0.002))
-                .body("zeroPointEnergy.unit", equalTo("kJ/mol"));
+                .body("zeroPointEnergy.unit", equalTo("kJ/mol"))
+                .body("warnings.size()", equalTo(0));
+    }
+
+    @Test
+    void theClassicalRotorIsFlaggedWhereItFails() {
+        // H2 in the high-temperature form at 100 K: theta / T = 0.88, far outside its range.
+        server.request().contentType("application/json")
+                .body(diatomic(2.01588, 60.853, 2, 4401.21, 1).replace("[298.15]", "[100, 3000]"))
+                .post("/v1/ideal-gas")
+                .then().statusCode(200)
+                .body("warnings[0].code", equalTo("ROTOR_NOT_CLASSICAL"))
+                .body("warnings[0].temperatures", org.hamcrest.Matchers.contains(100.0));
     }
 }

@@ -25,6 +25,8 @@ import org.statesum.units.PhysicalConstants;
 public final class IdealGasModel {
 
     private static final double U = GasPart.U;
+    /** theta_rot / T above which the classical rotor is flagged (error of ln q ~ theta / 3T = 0.017). */
+    public static final double CLASSICAL_ROTOR_LIMIT = 0.05;
     private static final double K = PhysicalConstants.BOLTZMANN_J_PER_K;
 
     private IdealGasModel() {
@@ -73,6 +75,7 @@ public final class IdealGasModel {
         precision.put("modesRaisedToFloor", species.vibrations().raisedCount());
         species.electronic().describe(precision);
         List<Warning> warnings = new ArrayList<>();
+        classicalRotorWarning(species.rotation(), temperaturesKelvin).ifPresent(warnings::add);
         return new IdealGasResult(new ThermoResult(temperaturesKelvin.clone(), total, precision, warnings, null),
                 contributions);
     }
@@ -99,6 +102,22 @@ public final class IdealGasModel {
         si.put(Quantity.ISOBARIC_HEAT_CAPACITY, SeriesSums.sum(List.of(cv, k)));
         si.put(Quantity.ISOCHORIC_HEAT_CAPACITY, cv);
         return si;
+    }
+
+    /**
+     * {@code ROTOR_NOT_CLASSICAL} where the high-temperature rotor form is used with theta / T above
+     * {@link #CLASSICAL_ROTOR_LIMIT}: ln q is then off by about theta / (3T) (0.017 k_B at the limit).
+     */
+    private static java.util.Optional<Warning> classicalRotorWarning(Rotation rotation, double[] t) {
+        double theta = rotation instanceof LinearRotor l && !l.levelSum() ? l.thetaKelvin()
+                : rotation instanceof NonlinearRotor n ? java.util.Arrays.stream(n.thetasKelvin()).max().orElse(0) : 0;
+        double[] hits = java.util.Arrays.stream(t).filter(v -> theta / v > CLASSICAL_ROTOR_LIMIT).toArray();
+        if (hits.length == 0) {
+            return java.util.Optional.empty();
+        }
+        return java.util.Optional.of(new Warning("ROTOR_NOT_CLASSICAL", "the high-temperature rotor form is "
+                + "used where T is below " + (1 / CLASSICAL_ROTOR_LIMIT) + " theta_rot; for a linear rotor "
+                + "prefer \"treatment\": \"level-sum\"", hits));
     }
 
     private static double[] times(double[] t, double factor) {
