@@ -106,10 +106,12 @@ final class ReactionRequestReader {
                 }
             }
         }
-        if (kind.isEmpty() || input == null || input.has("temperatures") || input.has("outputUnit")) {
+        if (kind.isEmpty() || input == null) {
             return Optional.empty();
         }
         ObjectNode withGrid = ((ObjectNode) input).deepCopy();
+        // A species' own grid or output unit was reported above; the rest of its input is still checked.
+        withGrid.remove("outputUnit");
         // With a bad grid (already reported) the species is still checked, on a stand-in grid.
         withGrid.set("temperatures", gridGood ? grid : STAND_IN_GRID);
         try {

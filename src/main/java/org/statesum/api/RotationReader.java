@@ -20,6 +20,9 @@ final class RotationReader {
     private static final List<String> STATES = List.of("sigma-g-plus", "sigma-g-minus");
     /** Largest symmetry number accepted (the icosahedral rotation group has order 60). */
     private static final int MAX_SYMMETRY_NUMBER = 60;
+    /** Rotational temperatures accepted, K: H2 has 88 K, heavy biomolecules ~1e-6 K. */
+    private static final double MIN_THETA = 1e-12;
+    private static final double MAX_THETA = 1e6;
 
     private RotationReader() {
     }
@@ -49,6 +52,7 @@ final class RotationReader {
                         ? Measures.positive(node.get(name), p + "/" + name, GasUnits.ROTATIONAL_CONSTANT, fields)
                         : map(Measures.positive(node.get(name), p + "/" + name, GasUnits.MOMENT, fields)))
                 .orElse(OptionalDouble.empty());
+        theta = checkTheta(theta, p, fields);
         OptionalDouble sigma = symmetryNumber(node, p, 2, fields);
         boolean levelSum = node.has("treatment")
                 && fields.oneOf(node.get("treatment"), p + "/treatment", TREATMENTS).map("level-sum"::equals)
@@ -76,6 +80,14 @@ final class RotationReader {
                         ? Measures.positives(node.get(name), p + "/" + name, 3, GasUnits.ROTATIONAL_CONSTANT, fields)
                         : Measures.positives(node.get(name), p + "/" + name, 3, GasUnits.MOMENT, fields)
                                 .map(RotationReader::thetas));
+        if (thetas.isPresent()) {
+            for (double t : thetas.get()) {
+                if (checkTheta(OptionalDouble.of(t), p, fields).isEmpty()) {
+                    thetas = Optional.empty();
+                    break;
+                }
+            }
+        }
         OptionalDouble sigma = symmetryNumber(node, p, MAX_SYMMETRY_NUMBER, fields);
         if (thetas.isEmpty() || sigma.isEmpty()) {
             return Optional.empty();
@@ -112,6 +124,16 @@ final class RotationReader {
         NuclearSpin probe = new NuclearSpin(spin.getAsDouble(), minus, true, 0);
         double x = modification.equals("normal") ? probe.normalOddFraction() : odd.getAsDouble();
         return new NuclearSpin(spin.getAsDouble(), minus, modification.equals("equilibrium"), x);
+    }
+
+    /** A rotational temperature must lie within [MIN_THETA, MAX_THETA] K (any real molecule does, widely). */
+    private static OptionalDouble checkTheta(OptionalDouble theta, String p, Fields fields) {
+        if (theta.isPresent() && !(theta.getAsDouble() >= MIN_THETA && theta.getAsDouble() <= MAX_THETA)) {
+            fields.add(p, "the rotational constant or moment gives theta_rot = h c B / k_B = " + theta.getAsDouble()
+                    + " K, outside " + MIN_THETA + " to " + MAX_THETA + " K");
+            return OptionalDouble.empty();
+        }
+        return theta;
     }
 
     private static OptionalDouble symmetryNumber(JsonNode node, String p, int max, Fields fields) {

@@ -23,8 +23,11 @@ public final class LinearRotorSum {
 
     /** The tail kept below this fraction of the kept sum (far below the rounding of the sum itself). */
     public static final double TAIL_TARGET = 0x1.0p-60;
-    /** Most levels summed at one temperature; T / theta beyond about 2.5e10 needs the high-T form. */
-    public static final int MAX_LEVEL = 5_000_000;
+    /**
+     * Most levels summed at one temperature (the level set of one temperature then takes ~50 MB);
+     * T / theta beyond about 1e10 needs the high-temperature form.
+     */
+    public static final int MAX_LEVEL = 1_000_000;
     /** Smallest a = theta N (N + 1) / T used: the integral test needs f_2 decreasing (a >= 6). */
     private static final double MIN_TAIL_EXPONENT = 6;
 

@@ -190,6 +190,25 @@ class IdealGasApiTest {
                 .body("warnings.size()", equalTo(0));
     }
 
+    @ParameterizedTest
+    @CsvSource(delimiter = '|', value = {
+        "{\"kind\": \"linear\", \"momentOfInertia\": {\"value\": 1e-300, \"unit\": \"kg*m^2\"}, \"symmetryNumber\": 1}|422",
+        "{\"kind\": \"linear\", \"rotationalConstant\": {\"value\": 1e300, \"unit\": \"cm-1\"}, \"symmetryNumber\": 1}|422",
+        "{\"kind\": \"nonlinear\", \"rotationalConstants\": {\"values\": [1e-300, 1, 1], \"unit\": \"MHz\"}, \"symmetryNumber\": 1}|422",
+        "{\"kind\": \"linear\", \"rotationalConstant\": {\"value\": 20, \"unit\": \"MHz\"}, \"symmetryNumber\": 1, \"treatment\": \"level-sum\"}|422",
+        "{\"kind\": \"linear\", \"rotationalConstant\": {\"value\": 1e5, \"unit\": \"cm-1\"}, \"symmetryNumber\": 1, \"treatment\": \"level-sum\"}|200",
+    })
+    void extremeRotorsAreAnsweredOrRefusedNeverFailed(String rotation, int status) {
+        // Extreme inputs end in an answer or a 422, never a 5xx (temperatures at both ends of the range).
+        server.request().contentType("application/json")
+                .body("""
+                        {"mass": {"value": 1e-20, "unit": "u"}, "rotation": %s,
+                         "vibrations": {"wavenumbers": [1e-9, 1e6]},
+                         "temperatures": {"values": [1e-12, 1e12]}}""".formatted(rotation))
+                .post("/v1/ideal-gas")
+                .then().statusCode(status);
+    }
+
     @Test
     void theClassicalRotorIsFlaggedWhereItFails() {
         // H2 in the high-temperature form at 100 K: theta / T = 0.88, far outside its range.

@@ -115,6 +115,7 @@ class ReactionApiTest {
     void errorsInsideSpeciesAreNamedUnderTheirSpecies() {
         String bad = body("{\"values\": [300]}")
                 .replace("\"value\": 28.0101", "\"value\": -28")
+                .replace("\"value\": 60.853", "\"value\": -60.853")
                 .replace("\"model\": \"ideal-gas\", \"input\": {\n     \"mass\": {\"value\": 44.0095",
                         "\"model\": \"crystal\", \"input\": {\n     \"mass\": {\"value\": 44.0095")
                 .replace("\"coefficient\": 1, \"model\": \"ideal-gas\", \"input\": {\n     \"mass\": {\"value\": 2.01588",
@@ -122,7 +123,9 @@ class ReactionApiTest {
         server.request().contentType("application/json").body(bad).post("/v1/reaction")
                 .then().statusCode(422)
                 .body("errors.pointer", hasItems("/species/0/input/mass/value", "/species/2/model",
-                        "/species/3/coefficient", "/species/3/input/temperatures"))
+                        "/species/3/coefficient", "/species/3/input/temperatures",
+                        "/species/3/input/rotation/rotationalConstant/value"))
+                .body("errors.size()", org.hamcrest.Matchers.equalTo(5))
                 .body("detail", containsString("fields are invalid"));
     }
 
