@@ -1,6 +1,7 @@
 package org.statesum.api;
 
 import com.fasterxml.jackson.databind.JsonNode;
+import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Optional;
@@ -40,7 +41,7 @@ final class IdealGasRequestReader {
         Optional<StandardState> state = standardState(root.get("standardState"), fields);
         Optional<double[]> temperatures = Optional.ofNullable(fields.required(root, "temperatures", ""))
                 .flatMap(t -> TemperatureGridReader.read(t, "/temperatures", config.maxTemperatures(), fields));
-        temperatures.filter(t -> java.util.Arrays.stream(t).anyMatch(v -> v == 0))
+        temperatures.filter(t -> Arrays.stream(t).anyMatch(v -> v == 0))
                 .ifPresent(t -> fields.add("/temperatures", "an ideal gas needs T > 0 (its entropy diverges at T = 0)"));
         Optional<EnergyUnit> unit = root.has("outputUnit")
                 ? fields.oneOf(root.get("outputUnit"), "/outputUnit", EnergyUnit.symbols()).flatMap(EnergyUnit::bySymbol)

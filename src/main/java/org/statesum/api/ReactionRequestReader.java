@@ -1,6 +1,7 @@
 package org.statesum.api;
 
 import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.ArrayList;
 import java.util.HashSet;
@@ -30,8 +31,8 @@ final class ReactionRequestReader {
     /** Default absolute tolerance of the root solver, K. */
     static final double DEFAULT_ROOT_TOLERANCE = 1e-6;
 
-    private static final JsonNode STAND_IN_GRID = com.fasterxml.jackson.databind.node.JsonNodeFactory.instance
-            .objectNode().set("values", com.fasterxml.jackson.databind.node.JsonNodeFactory.instance.arrayNode()
+    private static final JsonNode STAND_IN_GRID = JsonNodeFactory.instance
+            .objectNode().set("values", JsonNodeFactory.instance.arrayNode()
                     .add(298.15));
 
     private final ServiceConfig config;

@@ -1,10 +1,12 @@
 package org.statesum.models.gas;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.EnumMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import org.statesum.engine.DomainException;
 import org.statesum.engine.Series;
 import org.statesum.engine.Warning;
@@ -108,14 +110,14 @@ public final class IdealGasModel {
      * {@code ROTOR_NOT_CLASSICAL} where the high-temperature rotor form is used with theta / T above
      * {@link #CLASSICAL_ROTOR_LIMIT}: ln q is then off by about theta / (3T) (0.017 k_B at the limit).
      */
-    private static java.util.Optional<Warning> classicalRotorWarning(Rotation rotation, double[] t) {
+    private static Optional<Warning> classicalRotorWarning(Rotation rotation, double[] t) {
         double theta = rotation instanceof LinearRotor l && !l.levelSum() ? l.thetaKelvin()
-                : rotation instanceof NonlinearRotor n ? java.util.Arrays.stream(n.thetasKelvin()).max().orElse(0) : 0;
-        double[] hits = java.util.Arrays.stream(t).filter(v -> theta / v > CLASSICAL_ROTOR_LIMIT).toArray();
+                : rotation instanceof NonlinearRotor n ? Arrays.stream(n.thetasKelvin()).max().orElse(0) : 0;
+        double[] hits = Arrays.stream(t).filter(v -> theta / v > CLASSICAL_ROTOR_LIMIT).toArray();
         if (hits.length == 0) {
-            return java.util.Optional.empty();
+            return Optional.empty();
         }
-        return java.util.Optional.of(new Warning("ROTOR_NOT_CLASSICAL", "the high-temperature rotor form is "
+        return Optional.of(new Warning("ROTOR_NOT_CLASSICAL", "the high-temperature rotor form is "
                 + "used where T is below " + (1 / CLASSICAL_ROTOR_LIMIT) + " theta_rot; for a linear rotor "
                 + "prefer \"treatment\": \"level-sum\"", hits));
     }

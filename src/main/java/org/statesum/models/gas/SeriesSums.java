@@ -1,5 +1,6 @@
 package org.statesum.models.gas;
 
+import java.util.Arrays;
 import java.util.List;
 import org.statesum.engine.Series;
 
@@ -29,8 +30,8 @@ final class SeriesSums {
     static Series constant(int size, double value, double bound) {
         double[] v = new double[size];
         double[] b = new double[size];
-        java.util.Arrays.fill(v, value);
-        java.util.Arrays.fill(b, bound);
+        Arrays.fill(v, value);
+        Arrays.fill(b, bound);
         return new Series(v, b);
     }
 }
