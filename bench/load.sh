@@ -5,7 +5,7 @@
 #
 # Phases (every request goes to 127.0.0.1 only; every phase is bounded in time):
 #   1. ratio:    a small spectrum request vs the bare endpoint returning fixed JSON, 5 alternating
-#                rounds of 6 s each at saturation (wrk, 1 thread, 32 connections), after 20 s of
+#                rounds of 6 s each at saturation (wrk, 1 thread, 32 connections), after 30 s of
 #                warm-up each (alternating rounds even out the drift of a shared machine);
 #   2. mixed:    small (80 %) and medium (20 %) spectrum jobs for 60 s at saturation within the
 #                admission limit: every answer must be 200;
@@ -91,8 +91,8 @@ non2xx() { (grep -E 'Non-2xx' "$WORK/$1.wrk" | awk '{print $NF}') || true; }
 sockerr() { (grep -E 'Socket errors' "$WORK/$1.wrk" | sed 's/.*Socket errors: //') || true; }
 
 echo "warming up"
-run_wrk warm-bare 20 32 "http://127.0.0.1:$BARE/fixed" small
-run_wrk warm-small 20 32 "$BASE/v1/spectrum" small
+run_wrk warm-bare 30 32 "http://127.0.0.1:$BARE/fixed" small
+run_wrk warm-small 30 32 "$BASE/v1/spectrum" small
 run_wrk warm-mixed 10 16 "$BASE/v1/spectrum" mixed
 
 echo "phase 1: ratio"
@@ -134,8 +134,8 @@ print(f"probe: {len(refused)} x 503 with Retry-After (median {pct(refused, .5):.
 PY
 wait "$WRK_OVERLOAD" || true
 METRICS="$(curl -s "$BASE/metrics")"
-HEAP_MAX="$(printf '%s\n' "$METRICS" | awk '/^jvm_memory_max_bytes\{.*area="heap"/ && $2 > 0 {s += $2} END {printf "%.0f", s / 1048576}')"
-REJECTED="$(printf '%s\n' "$METRICS" | awk '/^statesum_requests_rejected_total\{.*reason="overloaded"/ {print $2}')"
+HEAP_MAX="$(printf '%s\n' "$METRICS" | awk '/^jvm_memory_max_bytes\{.*area="heap"/ && $NF > 0 {s += $NF} END {printf "%.0f", s / 1048576}')"
+REJECTED="$(printf '%s\n' "$METRICS" | awk '/^statesum_requests_rejected_total\{.*reason="overloaded"/ {print $NF}')"
 RSS_MAX="$(sort -n "$WORK/rss" | tail -1)"
 RSS_END="$(tail -1 "$WORK/rss")"
 

@@ -76,15 +76,18 @@ final class Operations {
         javalin.events.serverStopped(workers::shutdownNow);
     }
 
-    /** One compute request: admitted or 503, body read, a compute slot or 503, computed under the time limit. */
+    /**
+     * One compute request: admitted or 503, body read, a compute slot or 503, computed under the time
+     * limit and serialized while the slot is held (a large answer is CPU work too), then written.
+     */
     private void direct(Context ctx, String path, ComputeEndpoint endpoint) throws IOException {
         try (ComputeGate.Ticket ticket = gate.admit()) {
             JsonNode body = bodies.read(ctx);
-            Object answer;
+            byte[] json;
             try (ComputeGate.Slot slot = ticket.slotOrRefuse()) {
-                answer = runner.run(path, endpoint, body, JobRunner.noOuterDeadline(), () -> false);
+                json = mapper.writeValueAsBytes(
+                        runner.run(path, endpoint, body, JobRunner.noOuterDeadline(), () -> false));
             }
-            byte[] json = mapper.writeValueAsBytes(answer);
             // written straight to the response: no copy through Javalin's result stream
             ctx.status(200).contentType("application/json");
             ctx.res().setContentLength(json.length);
