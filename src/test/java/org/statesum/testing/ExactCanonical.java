@@ -4,14 +4,14 @@ import java.math.BigDecimal;
 import java.math.MathContext;
 
 /**
- * Canonical-ensemble quantities of a level set evaluated in 64-digit decimal arithmetic from the exact
+ * Canonical-ensemble quantities of a level set evaluated in 50-digit decimal arithmetic from the exact
  * values of the double inputs (energies E_i / k_B in kelvin, ln g_i exact or g_i whose logarithm is
  * taken here), independently of the engine: the reference against which its error bounds are tested.
  *
  * <p>All sums are taken about the level m with the largest exponent y_i = ln g_i - E_i / T, so that
  * no cancellation of large terms occurs: with z_i = (L_i - L_m) - (E_i - E_m) / T (differences of
  * exact inputs first), w_i = exp(z_i), s = sum w_i, p_i = w_i / s, mu = sum p_i (E_i - E_m) / T:
- * ln Z = L_m - E_m / T + ln s, S / k = L_m + ln s + mu, U = E_m + T mu,
+ * ln Z = L_m - E_m / T + ln s (ln s = log1p(s - 1), exact for tiny s - 1), S / k = L_m + ln s + mu, U = E_m + T mu,
  * C_V / k = sum p_i ((E_i - E_m) / T - mu)^2, F = -T ln Z, ln Z' = ln Z + E_0 / T.
  */
 public final class ExactCanonical {
@@ -71,12 +71,14 @@ public final class ExactCanonical {
         BigDecimal[] w = new BigDecimal[n];
         BigDecimal[] x = new BigDecimal[n];
         BigDecimal s = BigDecimal.ZERO;
+        BigDecimal rest = BigDecimal.ZERO;
         BigDecimal sx = BigDecimal.ZERO;
         int lowest = 0;
         for (int i = 0; i < n; i++) {
             x[i] = energies[i].subtract(energies[m]).divide(t, MC);
             w[i] = ExactMath.exp(logG[i].subtract(logG[m]).subtract(x[i], MC));
             s = s.add(w[i], MC);
+            rest = i == m ? rest : rest.add(w[i], MC);
             sx = sx.add(w[i].multiply(x[i], MC), MC);
             if (energies[i].compareTo(energies[lowest]) < 0) {
                 lowest = i;
@@ -90,7 +92,8 @@ public final class ExactCanonical {
             p[i] = w[i].divide(s, MC);
             var = var.add(p[i].multiply(d, MC).multiply(d, MC), MC);
         }
-        BigDecimal lnS = ExactMath.log(s);
+        // s = 1 + rest, since w_m = exp(0) = 1: ln s = log1p(rest) keeps ln(1 + 1e-70) exact.
+        BigDecimal lnS = ExactMath.log1p(rest);
         BigDecimal lnZ = logG[m].subtract(energies[m].divide(t, MC), MC).add(lnS, MC);
         BigDecimal entropy = logG[m].add(lnS, MC).add(mu, MC);
         BigDecimal internal = energies[m].add(t.multiply(mu, MC), MC);
