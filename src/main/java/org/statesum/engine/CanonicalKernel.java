@@ -68,7 +68,7 @@ final class CanonicalKernel {
         final double lgm = lg[m];
         final double em = en[m];
         final double errM = errB[m] + beta * errA[m];
-        KernelBounds b = new KernelBounds(n, errM, errA[m]);
+        KernelBounds b = new KernelBounds(n, errM, errA[m], errB[m]);
         double r = 0;
         double sumD = 0;
         for (int i = 0; i < n; i++) {
@@ -82,7 +82,7 @@ final class CanonicalKernel {
             // Exponent error of term i relative to the dominant one (exactly 0 for i = m: z_m = 0, t_m = 1).
             double e = i == m ? 0
                     : U * (Math.abs(lg[i] - lgm) + 3 * Math.abs(v) + Math.abs(z)) + errB[i] + beta * errA[i] + errM;
-            b.term(t, z, e, v, d, errA[i]);
+            b.term(t, z, e, v, d, i == m ? 0 : errA[i]);
         }
         double s = 1 + r;
         double mean = sumD / s;
@@ -135,7 +135,20 @@ final class CanonicalKernel {
         double fBound = (1 + 2 * U) * temperature * lnZBound + U * Math.abs(f);
         double uBound = b.reducedMean * temperature * (1 + 2 * U) + b.subnormalMeanKelvin + levels.energyErrorTerms[m]
                 + U * Math.abs(uInt);
-        out.set(column, lnZ, lnZBound, f, fBound, uInt, uBound, entropy, b.entropy, variance, b.heatCapacity,
+        // Crude but always valid: U within the energy range, S / k_B between min ln g and ln sum g,
+        // C_V / k_B between 0 and (range / 2T)^2 (Popoviciu's inequality), each widened by the input
+        // errors and a few roundings. They take over when the first-order bounds are not finite.
+        double lo = levels.groundEnergy - levels.groundEnergyError;
+        double hi = levels.energies[levels.topIndex] + levels.energyErrorTerms[levels.topIndex];
+        uBound = KernelBounds.honestMin(uBound, (1 + 4 * U) * Math.max(uInt - lo, hi - uInt));
+        double sLo = levels.minLogDegeneracy - levels.maxLogDegeneracyError;
+        double sHi = levels.logTotalDegeneracy + levels.maxLogDegeneracyError
+                + (levels.size + 4) * U * Math.abs(levels.logTotalDegeneracy);
+        double sBound = KernelBounds.honestMin(b.entropy, (1 + 4 * U) * Math.max(entropy - sLo, sHi - entropy));
+        double halfRange = 0.5 * beta * (hi - lo) * (1 + 4 * U);
+        double cvBound = KernelBounds.honestMin(b.heatCapacity,
+                Math.max(variance, halfRange * halfRange * (1 + 4 * U) - variance));
+        out.set(column, lnZ, lnZBound, f, fBound, uInt, uBound, entropy, sBound, variance, cvBound,
                 logRelative, factors[levels.topIndex] / s);
 
         if (out.populations != null) {
@@ -147,7 +160,7 @@ final class CanonicalKernel {
                 double z = (lg[i] - lgm) - d * beta;
                 double e = i == m ? 0
                         : U * (Math.abs(lg[i] - lgm) + 3 * Math.abs(d * beta) + Math.abs(z)) + errB[i] + beta * errA[i] + errM;
-                pb[i] = b.population(factors[i], z, e, s);
+                pb[i] = KernelBounds.honestMin(b.population(factors[i], z, e, s), Math.max(pop[i], 1 - pop[i]));
             }
         }
     }

@@ -49,7 +49,10 @@ final class KernelBounds {
     private double a1Kelvin;
     private double sumTA;
     private long belowUnderflow;
+    private double maxAll;
     private final double errAm;
+    /** Input error of ln g_m alone: S = L_m + ln s + beta mu holds E_m only through the weights. */
+    private final double errBm;
 
     double lnZ;
     double reducedMean;
@@ -60,7 +63,8 @@ final class KernelBounds {
     private double phi;
     private double epsS;
 
-    KernelBounds(int n, double errM, double errAm) {
+    KernelBounds(int n, double errM, double errAm, double errBm) {
+        this.errBm = errBm;
         this.n = n;
         this.errM = errM;
         this.errAm = errAm;
@@ -72,6 +76,7 @@ final class KernelBounds {
      */
     void term(double t, double z, double eh, double v, double d, double inputErrorKelvin) {
         sumTE += t * eh;
+        maxAll = Math.max(maxAll, eh);
         double ad = Math.abs(d);
         sumTAbsD += t * ad;
         sumTA += t * inputErrorKelvin;
@@ -118,6 +123,10 @@ final class KernelBounds {
         epsS = k0 / s;
         double lnSError = epsS < 0.5 ? epsS / (1 - epsS) : Double.POSITIVE_INFINITY;
         double log1pRounding = 2 * U * Math.abs(log1pR);
+        // Not first order: shifting every exponent by at most max e-hat shifts ln sum exp by at most as
+        // much, whatever its size; this caps the bound when the inputs are very uncertain.
+        double lnSCrude = maxAll + 2 * U + 2 * a0 / s + n * U;
+        lnSError = honestMin(lnSError, lnSCrude);
         lnZ = SAFETY * (errM + lnSError + log1pRounding + U * Math.abs(tail) + U * Math.abs(lnZValue)
                 + 6 * U * U * (Math.abs(p) + Math.abs(lgm) + Math.abs(lnZValue)));
 
@@ -131,7 +140,7 @@ final class KernelBounds {
         subnormalMeanKelvin = SAFETY * (a1Kelvin / s + 2 * n * ETA);
 
         entropy = SAFETY * (lnSError + log1pRounding + reducedMean + U * Math.abs(lgm + log1pR)
-                + U * Math.abs(entropyValue)) + errM;
+                + U * Math.abs(entropyValue)) + errBm;
 
         double varSum = variance * s;
         double weightsV = (phi * ((w2 + 2 * U * varSum) + variance * (sumTE + 2 * U * r))
@@ -141,6 +150,11 @@ final class KernelBounds {
         // V is stationary in its centre: a centre off by c adds exactly c^2, and only the rounding of
         // the mean (not the weights, which the centred sums above already cover) moves the centre.
         heatCapacity = SAFETY * (weightsV + valuesV + roundingV + meanRounding * meanRounding);
+    }
+
+    /** The smaller of two valid bounds; NaN (an undefined first-order bound) yields the other. */
+    static double honestMin(double firstOrder, double crude) {
+        return firstOrder <= crude ? firstOrder : crude;
     }
 
     /** Bound on the population t / s of one term (after {@link #finish}). */
