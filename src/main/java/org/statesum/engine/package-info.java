@@ -11,6 +11,9 @@
  * splittings (double-double) of T. J. Dekker, "A floating-point technique for extending the available
  * precision", Numer. Math. 18 (1971) 224; the variance cap of T. Popoviciu, "Sur les equations
  * algebriques ayant toutes leurs racines reelles", Mathematica (Cluj) 9 (1935) 129 (variance at most
- * a quarter of the squared range).
+ * a quarter of the squared range). Rotor level sums are cut
+ * where the integral test (the tail of a decreasing series is below the integral from the last kept
+ * term) bounds the rest; sign changes are located by R. P. Brent, Algorithms for Minimization without
+ * Derivatives (Prentice-Hall, 1973), ch. 4, as implemented by commons-math3.
  */
 package org.statesum.engine;
