@@ -65,6 +65,9 @@ final class CanonicalKernel {
             }
         }
 
+        // m maximises the computed y_i, not the exact one; but a level can compete with the maximum only
+        // when |ln g| and beta dE are below about 2e12 (LevelSet caps |ln g| at 1e12), where y carries
+        // at most 3e12 u < 1e-3: so every z_i below is at most 1e-3 and t_i <= 1.001, no overflow.
         final double lgm = lg[m];
         final double em = en[m];
         final double errM = errB[m] + beta * errA[m];

@@ -26,6 +26,8 @@ public final class BoundStatistics {
     public final List<String> violations = new ArrayList<>();
     public final List<String> inaccurate = new ArrayList<>();
     private double worstRatio;
+    /** Largest true error / bound seen: how close any bound came to being exceeded. */
+    private double worstUse;
     public String worst = "";
 
     public BoundStatistics(String name) {
@@ -41,6 +43,13 @@ public final class BoundStatistics {
                         + " bound " + bound + " at " + context);
             } else {
                 violations.add("");
+            }
+        }
+        if (bound > 0) {
+            worstUse = Math.max(worstUse, err / bound);
+            if (Boolean.getBoolean("statesum.dump") && err / bound > 0.7) {
+                System.out.println("CLOSE " + name + " v=" + value + " exact=" + exact.doubleValue() + " err=" + err
+                        + " bound=" + bound + " " + String.valueOf(context).substring(0, Math.min(300, String.valueOf(context).length())));
             }
         }
         double floor = Math.max(err, Math.ulp(exact.doubleValue()));
@@ -77,8 +86,9 @@ public final class BoundStatistics {
     }
 
     public String summary() {
-        return String.format("%-22s n=%6d  bound/max(err,ulp): median %.3g  p90 %.3g  max %.3g  violations %d  inaccurate %d",
-                name, count(), quantile(0.5), quantile(0.9), quantile(1.0), violations.size(), inaccurate.size());
+        return String.format("%-16s n=%6d  bound/max(err,ulp): median %.3g  p90 %.3g  max %.3g  max err/bound %.3g"
+                + "  violations %d  inaccurate %d", name, count(), quantile(0.5), quantile(0.9), quantile(1.0), worstUse,
+                violations.size(), inaccurate.size());
     }
 
     public static String firstFew(List<String> lines) {
