@@ -1,0 +1,140 @@
+package org.statesum.engine.sampling;
+
+import java.util.Arrays;
+import org.apache.commons.math3.linear.Array2DRowRealMatrix;
+import org.apache.commons.math3.linear.EigenDecomposition;
+import org.apache.commons.math3.linear.RealMatrix;
+
+/**
+ * The asymptotic covariance of the MBAR free energies and the overlap diagnostics, from the K x K
+ * matrix M = W^T W (M_ij = sum_n W_in W_jn) and the counts N = diag(N_k).
+ *
+ * <p>Shirts and Chodera 2008, eq. (D6)-(D8): Theta = W^T (I - W N W^T)^+ W. With the thin singular
+ * value decomposition W = U Sigma V^T this is Theta = V Sigma (I - Sigma V^T N V Sigma)^+ Sigma V^T,
+ * and V, Sigma^2 are the eigenvectors and eigenvalues of M, so the N-long dimension never appears.
+ * The pseudo-inverse drops eigenvalues below {@link #PSEUDO_INVERSE_CUTOFF} of the largest: the shift
+ * of all f_k by one constant is always such a null direction. var(f_j - f_i) = Theta_ii + Theta_jj - 2
+ * Theta_ij.
+ */
+final class MbarCovariance {
+
+    /** Relative eigenvalue cut-off of the pseudo-inverse: well above rounding (~1e-16 K), far below data. */
+    static final double PSEUDO_INVERSE_CUTOFF = 1e-10;
+
+    private MbarCovariance() {
+    }
+
+    /** Standard deviations of f_j - f_i, [i][j]. */
+    static double[][] differenceUncertainties(double[][] m, double[] counts) {
+        int k = m.length;
+        EigenDecomposition mEigen = new EigenDecomposition(symmetric(m));
+        double[] sigma = new double[k];
+        RealMatrix v = mEigen.getV();
+        for (int i = 0; i < k; i++) {
+            sigma[i] = Math.sqrt(Math.max(0, mEigen.getRealEigenvalue(i)));
+        }
+        // A = I - Sigma V^T N V Sigma
+        double[][] a = new double[k][k];
+        for (int i = 0; i < k; i++) {
+            for (int j = 0; j < k; j++) {
+                double s = 0;
+                for (int l = 0; l < k; l++) {
+                    s += v.getEntry(l, i) * counts[l] * v.getEntry(l, j);
+                }
+                a[i][j] = (i == j ? 1 : 0) - sigma[i] * s * sigma[j];
+            }
+        }
+        double[][] aPlus = pseudoInverse(a);
+        // Theta = V Sigma A+ Sigma V^T
+        double[][] inner = new double[k][k];
+        for (int i = 0; i < k; i++) {
+            for (int j = 0; j < k; j++) {
+                inner[i][j] = sigma[i] * aPlus[i][j] * sigma[j];
+            }
+        }
+        double[][] theta = new double[k][k];
+        for (int i = 0; i < k; i++) {
+            for (int j = 0; j < k; j++) {
+                double s = 0;
+                for (int p = 0; p < k; p++) {
+                    double vip = v.getEntry(i, p);
+                    for (int q = 0; q < k; q++) {
+                        s += vip * inner[p][q] * v.getEntry(j, q);
+                    }
+                }
+                theta[i][j] = s;
+            }
+        }
+        double[][] sd = new double[k][k];
+        for (int i = 0; i < k; i++) {
+            for (int j = 0; j < k; j++) {
+                sd[i][j] = i == j ? 0 : Math.sqrt(Math.max(0, theta[i][i] + theta[j][j] - 2 * theta[i][j]));
+            }
+        }
+        return sd;
+    }
+
+    /** O_ij = M_ij N_j. */
+    static double[][] overlap(double[][] m, double[] counts) {
+        int k = m.length;
+        double[][] o = new double[k][k];
+        for (int i = 0; i < k; i++) {
+            for (int j = 0; j < k; j++) {
+                o[i][j] = m[i][j] * counts[j];
+            }
+        }
+        return o;
+    }
+
+    /**
+     * The second-largest eigenvalue of O, from the symmetric similar matrix N^1/2 M N^1/2 (same
+     * eigenvalues, all real and in [0, 1]).
+     */
+    static double secondLargestEigenvalue(double[][] m, double[] counts) {
+        int k = m.length;
+        double[][] s = new double[k][k];
+        for (int i = 0; i < k; i++) {
+            for (int j = 0; j < k; j++) {
+                s[i][j] = Math.sqrt(counts[i]) * m[i][j] * Math.sqrt(counts[j]);
+            }
+        }
+        double[] eigenvalues = new EigenDecomposition(symmetric(s)).getRealEigenvalues().clone();
+        Arrays.sort(eigenvalues);
+        return Math.min(1, Math.max(0, eigenvalues[k - 2]));
+    }
+
+    private static double[][] pseudoInverse(double[][] a) {
+        int k = a.length;
+        EigenDecomposition eigen = new EigenDecomposition(symmetric(a));
+        double largest = 0;
+        for (int i = 0; i < k; i++) {
+            largest = Math.max(largest, Math.abs(eigen.getRealEigenvalue(i)));
+        }
+        RealMatrix v = eigen.getV();
+        double[][] plus = new double[k][k];
+        for (int p = 0; p < k; p++) {
+            double lambda = eigen.getRealEigenvalue(p);
+            if (Math.abs(lambda) <= PSEUDO_INVERSE_CUTOFF * largest) {
+                continue;
+            }
+            for (int i = 0; i < k; i++) {
+                for (int j = 0; j < k; j++) {
+                    plus[i][j] += v.getEntry(i, p) * v.getEntry(j, p) / lambda;
+                }
+            }
+        }
+        return plus;
+    }
+
+    /** The matrix made exactly symmetric (rounding may leave the halves a few ulps apart). */
+    private static RealMatrix symmetric(double[][] a) {
+        int k = a.length;
+        double[][] s = new double[k][k];
+        for (int i = 0; i < k; i++) {
+            for (int j = 0; j < k; j++) {
+                s[i][j] = 0.5 * (a[i][j] + a[j][i]);
+            }
+        }
+        return new Array2DRowRealMatrix(s, false);
+    }
+}
