@@ -1,9 +1,6 @@
 package org.statesum.engine.sampling;
 
 import java.util.Arrays;
-import org.apache.commons.math3.linear.Array2DRowRealMatrix;
-import org.apache.commons.math3.linear.EigenDecomposition;
-import org.apache.commons.math3.linear.RealMatrix;
 
 /**
  * The asymptotic covariance of the MBAR free energies and the overlap diagnostics, from the K x K
@@ -12,7 +9,7 @@ import org.apache.commons.math3.linear.RealMatrix;
  * <p>Shirts and Chodera 2008, eq. (D6)-(D8): Theta = W^T (I - W N W^T)^+ W. With the thin singular
  * value decomposition W = U Sigma V^T this is Theta = V Sigma (I - Sigma V^T N V Sigma)^+ Sigma V^T,
  * and V, Sigma^2 are the eigenvectors and eigenvalues of M, so the N-long dimension never appears.
- * The pseudo-inverse drops eigenvalues below {@link #PSEUDO_INVERSE_CUTOFF} of the largest: the shift
+ * Eigenproblems by {@link SymmetricEigen}. The pseudo-inverse drops eigenvalues below {@link #PSEUDO_INVERSE_CUTOFF} of the largest: the shift
  * of all f_k by one constant is always such a null direction. var(f_j - f_i) = Theta_ii + Theta_jj - 2
  * Theta_ij.
  */
@@ -27,11 +24,11 @@ final class MbarCovariance {
     /** Standard deviations of f_j - f_i, [i][j]. */
     static double[][] differenceUncertainties(double[][] m, double[] counts) {
         int k = m.length;
-        EigenDecomposition mEigen = new EigenDecomposition(symmetric(m));
+        SymmetricEigen mEigen = SymmetricEigen.of(m);
         double[] sigma = new double[k];
-        RealMatrix v = mEigen.getV();
+        double[][] v = mEigen.vectors;
         for (int i = 0; i < k; i++) {
-            sigma[i] = Math.sqrt(Math.max(0, mEigen.getRealEigenvalue(i)));
+            sigma[i] = Math.sqrt(Math.max(0, mEigen.values[i]));
         }
         // A = I - Sigma V^T N V Sigma
         double[][] a = new double[k][k];
@@ -39,7 +36,7 @@ final class MbarCovariance {
             for (int j = 0; j < k; j++) {
                 double s = 0;
                 for (int l = 0; l < k; l++) {
-                    s += v.getEntry(l, i) * counts[l] * v.getEntry(l, j);
+                    s += v[l][i] * counts[l] * v[l][j];
                 }
                 a[i][j] = (i == j ? 1 : 0) - sigma[i] * s * sigma[j];
             }
@@ -57,9 +54,9 @@ final class MbarCovariance {
             for (int j = 0; j < k; j++) {
                 double s = 0;
                 for (int p = 0; p < k; p++) {
-                    double vip = v.getEntry(i, p);
+                    double vip = v[i][p];
                     for (int q = 0; q < k; q++) {
-                        s += vip * inner[p][q] * v.getEntry(j, q);
+                        s += vip * inner[p][q] * v[j][q];
                     }
                 }
                 theta[i][j] = s;
@@ -98,43 +95,31 @@ final class MbarCovariance {
                 s[i][j] = Math.sqrt(counts[i]) * m[i][j] * Math.sqrt(counts[j]);
             }
         }
-        double[] eigenvalues = new EigenDecomposition(symmetric(s)).getRealEigenvalues().clone();
+        double[] eigenvalues = SymmetricEigen.of(s).values;
         Arrays.sort(eigenvalues);
         return Math.min(1, Math.max(0, eigenvalues[k - 2]));
     }
 
     private static double[][] pseudoInverse(double[][] a) {
         int k = a.length;
-        EigenDecomposition eigen = new EigenDecomposition(symmetric(a));
+        SymmetricEigen eigen = SymmetricEigen.of(a);
         double largest = 0;
         for (int i = 0; i < k; i++) {
-            largest = Math.max(largest, Math.abs(eigen.getRealEigenvalue(i)));
+            largest = Math.max(largest, Math.abs(eigen.values[i]));
         }
-        RealMatrix v = eigen.getV();
+        double[][] v = eigen.vectors;
         double[][] plus = new double[k][k];
         for (int p = 0; p < k; p++) {
-            double lambda = eigen.getRealEigenvalue(p);
+            double lambda = eigen.values[p];
             if (Math.abs(lambda) <= PSEUDO_INVERSE_CUTOFF * largest) {
                 continue;
             }
             for (int i = 0; i < k; i++) {
                 for (int j = 0; j < k; j++) {
-                    plus[i][j] += v.getEntry(i, p) * v.getEntry(j, p) / lambda;
+                    plus[i][j] += v[i][p] * v[j][p] / lambda;
                 }
             }
         }
         return plus;
-    }
-
-    /** The matrix made exactly symmetric (rounding may leave the halves a few ulps apart). */
-    private static RealMatrix symmetric(double[][] a) {
-        int k = a.length;
-        double[][] s = new double[k][k];
-        for (int i = 0; i < k; i++) {
-            for (int j = 0; j < k; j++) {
-                s[i][j] = 0.5 * (a[i][j] + a[j][i]);
-            }
-        }
-        return new Array2DRowRealMatrix(s, false);
     }
 }
