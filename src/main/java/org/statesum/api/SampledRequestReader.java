@@ -92,7 +92,8 @@ final class SampledRequestReader {
             return null;
         }
         if (node.size() > SampledBodyParser.MAX_STATES) {
-            fields.add("/sampleCounts", "has " + node.size() + " elements; the limit is " + SampledBodyParser.MAX_STATES);
+            fields.add("/sampleCounts", "has " + node.size() + " elements; the limit is "
+                    + SampledBodyParser.MAX_STATES);
             return null;
         }
         int[] counts = new int[node.size()];

@@ -67,7 +67,8 @@ final class SampledResponse {
         return body;
     }
 
-    private static Map<String, Object> vector(String unit, double scale, double[] values, double[] sd, double[] bounds) {
+    private static Map<String, Object> vector(String unit, double scale, double[] values, double[] sd,
+            double[] bounds) {
         Map<String, Object> out = new LinkedHashMap<>();
         out.put("unit", unit);
         out.put("reference", 0);

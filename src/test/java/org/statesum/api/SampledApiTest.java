@@ -158,6 +158,24 @@ class SampledApiTest {
                 .body("overlap.secondLargestEigenvalue", closeTo(1.0, 1e-6));
     }
 
+    @Test
+    void theReadmeExampleAnswersForEveryMethod() {
+        for (String method : new String[] {"mbar", "bar", "exponential-averaging"}) {
+            server.request().contentType("application/json")
+                    .body("""
+                            {"method": "%s",
+                             "reducedPotentials": [[0.1, 0.4, 1.2, 2.0, 3.1, 4.4],
+                                                   [0.5, 0.3, 0.2, 0.6, 1.5, 2.2],
+                                                   [1.6, 1.1, 0.4, 0.2, 0.3, 0.5]],
+                             "sampleCounts": [2, 2, 2], "temperature": 298.15, "outputUnit": "kJ/mol"}"""
+                            .formatted(method))
+                    .post("/v1/sampled")
+                    .then().statusCode(200)
+                    .body("freeEnergyDifferences.values[1][1]", equalTo(0.0))
+                    .body("freeEnergies.temperature.value", equalTo(298.15));
+        }
+    }
+
     private static byte[] gzip(String text) throws IOException {
         ByteArrayOutputStream bytes = new ByteArrayOutputStream();
         try (GZIPOutputStream out = new GZIPOutputStream(bytes)) {

@@ -67,7 +67,8 @@ public final class BennettAcceptanceRatio {
         precision.put("solver", "Brent root finding on Bennett's equation in logarithms (commons-math3)");
         precision.put("rootAbsoluteAccuracy", ROOT_ABSOLUTE_ACCURACY);
         precision.put("functionEvaluations", evaluations);
-        precision.put("errorAnalysis", "root tolerance plus first-order rounding of the equation over its slope, doubled");
+        precision.put("errorAnalysis",
+                "root tolerance plus first-order rounding of the equation over its slope, doubled");
         precision.put("uncertainty", "asymptotic (Shirts et al. 2003), one standard deviation");
         return new FreeEnergyEstimate("bar", PairChain.values(steps), PairChain.uncertainties(variances),
                 PairChain.errorBounds(steps, bounds), null, precision, List.of());

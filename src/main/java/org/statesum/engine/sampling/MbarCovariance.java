@@ -9,7 +9,8 @@ import java.util.Arrays;
  * <p>Shirts and Chodera 2008, eq. (D6)-(D8): Theta = W^T (I - W N W^T)^+ W. With the thin singular
  * value decomposition W = U Sigma V^T this is Theta = V Sigma (I - Sigma V^T N V Sigma)^+ Sigma V^T,
  * and V, Sigma^2 are the eigenvectors and eigenvalues of M, so the N-long dimension never appears.
- * Eigenproblems by {@link SymmetricEigen}. The pseudo-inverse drops eigenvalues below {@link #PSEUDO_INVERSE_CUTOFF} of the largest: the shift
+ * Eigenproblems by {@link SymmetricEigen}. The pseudo-inverse drops eigenvalues below
+ * {@link #PSEUDO_INVERSE_CUTOFF} of the largest: the shift
  * of all f_k by one constant is always such a null direction. var(f_j - f_i) = Theta_ii + Theta_jj - 2
  * Theta_ij.
  */

@@ -28,7 +28,8 @@ class MbarTest {
         FreeEnergyEstimate mbar = Mbar.estimate(wells.sample(new int[] {4000, 4000, 0, 4000}, 12));
         // State 2 (kappa 4, centre 1) sits between sampled wells; 4 sd as above.
         assertEquals(wells.exactDifference(2), mbar.values()[2], 4 * mbar.uncertainties()[2]);
-        assertEquals(0, mbar.overlap().matrix()[0][2] * 0, 0);
+        // An unsampled state takes no samples: its column of the overlap matrix is zero.
+        assertEquals(0, mbar.overlap().matrix()[0][2], 0);
     }
 
     @Test
@@ -42,6 +43,31 @@ class MbarTest {
         assertEquals(bar.values()[1], mbar.values()[1], 1e-8);
         // The asymptotic variances coincide as well (Shirts et al. 2003 vs. the MBAR covariance).
         assertEquals(bar.uncertainties()[1], mbar.uncertainties()[1], 1e-8);
+        // Each reports a bound on its numerical error; together they must cover the disagreement.
+        assertTrue(Math.abs(bar.values()[1] - mbar.values()[1]) <= bar.errorBounds()[1] + mbar.errorBounds()[1]);
+    }
+
+    @Test
+    void shiftingAStatesPotentialShiftsItsFreeEnergyByTheSameAmount() {
+        // u_k -> u_k + c_k multiplies Z_k by e^{-c_k}, so f_k -> f_k + c_k (identity of the estimator:
+        // W_kn is unchanged once f_k absorbs c_k). Checked to the solver's error bounds.
+        ReducedPotentials data = wells.sample(new int[] {500, 500, 0, 500}, 14);
+        double[] shifts = {3.5, -20, 7.25, 0.125};
+        double[][] shifted = new double[4][];
+        for (int k = 0; k < 4; k++) {
+            shifted[k] = data.u()[k].clone();
+            for (int n = 0; n < shifted[k].length; n++) {
+                shifted[k][n] += shifts[k];
+            }
+        }
+        FreeEnergyEstimate before = Mbar.estimate(data);
+        FreeEnergyEstimate after = Mbar.estimate(ReducedPotentials.of(shifted, data.counts()));
+        for (int k = 1; k < 4; k++) {
+            // Adding the shift rounds each u once (u |u| relative), hence the extra 1e-12.
+            double tolerance = before.errorBounds()[k] + after.errorBounds()[k] + 1e-12;
+            assertEquals(before.values()[k] + shifts[k] - shifts[0], after.values()[k], tolerance, "state " + k);
+            assertEquals(before.uncertainties()[k], after.uncertainties()[k], 1e-9);
+        }
     }
 
     @Test
