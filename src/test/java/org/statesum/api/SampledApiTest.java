@@ -159,18 +159,14 @@ class SampledApiTest {
     }
 
     @Test
-    void theReadmeExampleAnswersForEveryMethod() {
+    void theExampleFileAnswersForEveryMethod() throws IOException {
+        String example = java.nio.file.Files.readString(java.nio.file.Path.of("examples/solvation-windows.json"));
         for (String method : new String[] {"mbar", "bar", "exponential-averaging"}) {
             server.request().contentType("application/json")
-                    .body("""
-                            {"method": "%s",
-                             "reducedPotentials": [[0.1, 0.4, 1.2, 2.0, 3.1, 4.4],
-                                                   [0.5, 0.3, 0.2, 0.6, 1.5, 2.2],
-                                                   [1.6, 1.1, 0.4, 0.2, 0.3, 0.5]],
-                             "sampleCounts": [2, 2, 2], "temperature": 298.15, "outputUnit": "kJ/mol"}"""
-                            .formatted(method))
+                    .body(example.replace("\"mbar\"", "\"" + method + "\""))
                     .post("/v1/sampled")
                     .then().statusCode(200)
+                    .body("method", equalTo(method))
                     .body("freeEnergyDifferences.values[1][1]", equalTo(0.0))
                     .body("freeEnergies.temperature.value", equalTo(298.15));
         }
