@@ -108,8 +108,8 @@ class SampledApiTest {
         TestServer small = TestServer.with(ServiceConfig.fromEnvironment(
                 java.util.Map.of("STATESUM_MAX_BODY_BYTES", String.valueOf(1 << 20))));
         try {
-            // 64 MiB of blanks inflate from about 64 KiB: the limit (1 MiB) applies to the inflated size.
-            byte[] bomb = gzip("{\"method\": \"mbar\"" + " ".repeat(64 << 20) + "}");
+            // 16 MiB of blanks inflate from about 16 KiB: the limit (1 MiB) applies to the inflated size.
+            byte[] bomb = gzip("{\"method\": \"mbar\"" + " ".repeat(16 << 20) + "}");
             small.request().contentType("application/json").header("Content-Encoding", "gzip").body(bomb)
                     .post("/v1/sampled")
                     .then().statusCode(413).contentType("application/problem+json");
