@@ -56,7 +56,8 @@ final class MbarSolver {
             countsD[i] = counts[i];
         }
         boolean unsampled = ks < kAll;
-        double[] logD = unsampled ? new double[n] : null;
+        // ln D_n of the latest pass: for unsampled states, and for the log-space update below.
+        double[] logD = new double[n];
         MbarPass pass = new MbarPass(rows, counts);
         double[] f = new double[ks];
         MbarPass.Sums cur = pass.run(f, countsD, false, logD);
@@ -96,10 +97,22 @@ final class MbarSolver {
                     continue;
                 }
             }
-            // Self-consistent step: f_i <- f_i - ln S_i, then hold the first sampled state at 0.
+            // Self-consistent step: f_i <- f_i - ln S_i, then hold the first sampled state at 0. When
+            // some S_i has underflowed or overflowed (f far from consistent, e.g. states whose
+            // potentials differ by thousands of k_B T), the same update is taken in logarithms:
+            // f_i <- -ln sum_n exp(-u_in - ln D_n).
             double[] next = new double[ks];
+            boolean representable = true;
             for (int i = 0; i < ks; i++) {
-                next[i] = f[i] - Math.log(cur.s()[i]);
+                double si = cur.s()[i];
+                representable &= si >= Double.MIN_NORMAL && si <= Double.MAX_VALUE;
+            }
+            if (!representable && !curIsLast) {
+                cur = pass.run(f, countsD, newton, logD);
+                passes++;
+            }
+            for (int i = 0; i < ks; i++) {
+                next[i] = representable ? f[i] - Math.log(cur.s()[i]) : -logSumExp(rows[i], logD);
             }
             for (int i = ks - 1; i >= 0; i--) {
                 next[i] -= next[0];

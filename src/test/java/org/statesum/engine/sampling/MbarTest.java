@@ -48,6 +48,29 @@ class MbarTest {
     }
 
     @Test
+    void statesWhosePotentialsDifferByThousandsOfKtConverge() {
+        // Offsets of thousands of k_B T between states (absolute energies at different temperatures):
+        // the first weights underflow, and the update must be taken in logarithms.
+        ReducedPotentials data = wells.sample(new int[] {500, 500, 500, 500}, 15);
+        double[] shifts = {0, 5000, -3000, 800};
+        double[][] shifted = new double[4][];
+        for (int k = 0; k < 4; k++) {
+            shifted[k] = data.u()[k].clone();
+            for (int n = 0; n < shifted[k].length; n++) {
+                shifted[k][n] += shifts[k];
+            }
+        }
+        FreeEnergyEstimate before = Mbar.estimate(data);
+        FreeEnergyEstimate after = Mbar.estimate(ReducedPotentials.of(shifted, data.counts()));
+        assertTrue((double) after.precision().get("relativeGradient") < 1e-10);
+        for (int k = 1; k < 4; k++) {
+            // Adding a shift of up to 5000 rounds each u by up to ulp(5000) / 2 = 4.5e-13.
+            double tolerance = before.errorBounds()[k] + after.errorBounds()[k] + 2e-12;
+            assertEquals(before.values()[k] + shifts[k], after.values()[k], tolerance, "state " + k);
+        }
+    }
+
+    @Test
     void shiftingAStatesPotentialShiftsItsFreeEnergyByTheSameAmount() {
         // u_k -> u_k + c_k multiplies Z_k by e^{-c_k}, so f_k -> f_k + c_k (identity of the estimator:
         // W_kn is unchanged once f_k absorbs c_k). Checked to the solver's error bounds.
