@@ -11,7 +11,7 @@ import net.jqwik.api.constraints.LongRange;
  * Identity of every estimator: adding a constant c_k to the reduced potential of state k multiplies
  * Z_k by e^{-c_k}, so f_k - f_0 moves by exactly c_k - c_0, and the uncertainties do not move.
  */
-class ShiftInvarianceProperties {
+class ShiftInvariancePropertiesTest {
 
     private static final HarmonicWells WELLS =
             new HarmonicWells(new double[] {1, 1.6, 2.5}, new double[] {0, 0.4, 0.8});
