@@ -50,15 +50,23 @@ final class MbarCovariance {
                 inner[i][j] = sigma[i] * aPlus[i][j] * sigma[j];
             }
         }
+        // Theta = V (inner V^T), two K^3 products.
+        double[][] right = new double[k][k];
+        for (int p = 0; p < k; p++) {
+            for (int j = 0; j < k; j++) {
+                double s = 0;
+                for (int q = 0; q < k; q++) {
+                    s += inner[p][q] * v[j][q];
+                }
+                right[p][j] = s;
+            }
+        }
         double[][] theta = new double[k][k];
         for (int i = 0; i < k; i++) {
             for (int j = 0; j < k; j++) {
                 double s = 0;
                 for (int p = 0; p < k; p++) {
-                    double vip = v[i][p];
-                    for (int q = 0; q < k; q++) {
-                        s += vip * inner[p][q] * v[j][q];
-                    }
+                    s += v[i][p] * right[p][j];
                 }
                 theta[i][j] = s;
             }
