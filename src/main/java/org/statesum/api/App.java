@@ -22,6 +22,8 @@ public final class App {
                 .add("/v1/spectrum", new SpectrumController(config))
                 .add("/v1/ideal-gas", new IdealGasController(config))
                 .add("/v1/reaction", new ReactionController(config));
+        SampledController sampled = new SampledController(mapper);
+        compute.add("/v1/sampled", sampled);
         ConstantsController constants;
         try {
             constants = new ConstantsController(mapper);
@@ -37,7 +39,9 @@ public final class App {
             javalin.jetty.port = config.port();
             javalin.http.maxRequestSize = config.maxBodyBytes();
             problems.register(javalin);
-            operations.install(javalin, compute);
+            // /v1/sampled is streamed rather than parsed into a tree: its matrices reach 1e7 numbers (see
+            // SampledBodyParser); in a batch, where the job body is a tree already, it reads the tree.
+            operations.install(javalin, compute, Map.of("/v1/sampled", ctx -> sampled.answer(bodies.open(ctx))));
             javalin.routes.get("/v1/constants", constants::get);
             javalin.routes.get("/openapi.yaml", ctx -> ctx.contentType("application/yaml").result(openApi));
         });

@@ -4,6 +4,7 @@ import com.fasterxml.jackson.databind.JsonNode;
 import java.util.List;
 import java.util.concurrent.CancellationException;
 import java.util.function.BooleanSupplier;
+import java.util.function.Supplier;
 import org.statesum.engine.Cancellation;
 
 /**
@@ -29,6 +30,11 @@ final class JobRunner {
      * @param unwanted true once the answer will not be read
      */
     Object run(String path, ComputeEndpoint endpoint, JsonNode body, long notAfterNanos, BooleanSupplier unwanted) {
+        return run(path, () -> endpoint.answer(body), notAfterNanos, unwanted);
+    }
+
+    /** As above, for work that reads its own body (a streamed endpoint). */
+    Object run(String path, Supplier<Object> work, long notAfterNanos, BooleanSupplier unwanted) {
         long start = System.nanoTime();
         long ownDeadline = start + ops.timeLimitMillis() * 1_000_000L;
         long deadline = ownDeadline - notAfterNanos < 0 ? ownDeadline : notAfterNanos;
@@ -42,7 +48,7 @@ final class JobRunner {
         };
         String outcome = "error";
         try {
-            Object answer = Cancellation.during(check, () -> endpoint.answer(body));
+            Object answer = Cancellation.during(check, work);
             outcome = "answered";
             return answer;
         } catch (ProblemException e) {

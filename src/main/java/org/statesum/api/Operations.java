@@ -9,11 +9,14 @@ import io.javalin.http.Context;
 import jakarta.servlet.DispatcherType;
 import java.io.IOException;
 import java.util.EnumSet;
+import java.util.Map;
 import java.util.Set;
 import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.atomic.AtomicInteger;
+import java.util.function.Function;
+import java.util.function.Supplier;
 import org.eclipse.jetty.ee10.servlet.FilterHolder;
 
 /**
@@ -47,8 +50,18 @@ final class Operations {
         this.lifecycle = new Lifecycle(gate, metrics.inFlight(), ops);
     }
 
-    /** Installs the operations features and serves every compute route of {@code compute} through them. */
-    void install(JavalinConfig javalin, ComputeRoutes compute) {
+    /** A compute route that reads its own body from the request (streamed, never held as a tree). */
+    @FunctionalInterface
+    interface StreamedEndpoint {
+        Object answer(Context ctx);
+    }
+
+    /**
+     * Installs the operations features and serves every compute route of {@code compute} through them;
+     * the paths in {@code streamed} are served directly by their streamed reader, and from a batch by
+     * their {@link ComputeEndpoint}.
+     */
+    void install(JavalinConfig javalin, ComputeRoutes compute, Map<String, StreamedEndpoint> streamed) {
         javalin.appData(COMPUTE_ROUTES, compute);
         javalin.events.handlerAdded(handler -> {
             if (!handler.getPath().contains("*") && !handler.getPath().contains("{")) {
@@ -64,7 +77,12 @@ final class Operations {
         });
         AccessControl access = new AccessControl(ops, metrics);
         javalin.routes.before(access::before);
-        compute.all().forEach((path, endpoint) -> javalin.routes.post(path, ctx -> direct(ctx, path, endpoint)));
+        compute.all().forEach((path, endpoint) -> javalin.routes.post(path, streamed.containsKey(path)
+                ? ctx -> direct(ctx, path, c -> () -> streamed.get(path).answer(c))
+                : ctx -> direct(ctx, path, c -> {
+                    JsonNode body = bodies.read(c);
+                    return () -> endpoint.answer(body);
+                })));
         ExecutorService workers = Executors.newFixedThreadPool(ops.maxConcurrentJobs(), daemonThreads());
         BatchController batch = new BatchController(mapper, bodies,
                 new BatchRequestReader(compute, ops.maxBatchJobs()), gate, runner, workers, metrics, ops);
@@ -77,16 +95,17 @@ final class Operations {
     }
 
     /**
-     * One compute request: admitted or 503, body read, a compute slot or 503, computed under the time
-     * limit and serialized while the slot is held (a large answer is CPU work too), then written.
+     * One compute request: admitted or 503, body read (at most running + queued bodies are in memory),
+     * a compute slot or 503, computed under the time limit and serialized while the slot is held (a
+     * large answer is CPU work too), then written. A streamed endpoint reads as it computes, so its
+     * reading happens inside the slot.
      */
-    private void direct(Context ctx, String path, ComputeEndpoint endpoint) throws IOException {
+    private void direct(Context ctx, String path, Function<Context, Supplier<Object>> prepare) throws IOException {
         try (ComputeGate.Ticket ticket = gate.admit()) {
-            JsonNode body = bodies.read(ctx);
+            Supplier<Object> work = prepare.apply(ctx);
             byte[] json;
             try (ComputeGate.Slot slot = ticket.slotOrRefuse()) {
-                json = mapper.writeValueAsBytes(
-                        runner.run(path, endpoint, body, JobRunner.noOuterDeadline(), () -> false));
+                json = mapper.writeValueAsBytes(runner.run(path, work, JobRunner.noOuterDeadline(), () -> false));
             }
             // written straight to the response: no copy through Javalin's result stream
             ctx.status(200).contentType("application/json");
