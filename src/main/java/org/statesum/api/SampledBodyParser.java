@@ -129,8 +129,8 @@ final class SampledBodyParser {
                             + ReducedPotentials.MAX_ABS_REDUCED_POTENTIAL + " in magnitude", reported);
                     continue;
                 }
-                if (n == row.length) {
-                    row = Arrays.copyOf(row, (int) Math.min((long) n * 2, MAX_SAMPLES));
+                if (n >= row.length) { // n may have passed row.length over skipped bad elements
+                    row = Arrays.copyOf(row, (int) Math.min(Math.max((long) n * 2, n + 1L), MAX_SAMPLES));
                 }
                 row[n] = v;
             }

@@ -14,6 +14,7 @@ import java.time.Duration;
 import java.util.List;
 import java.util.Random;
 import java.util.Set;
+import net.jqwik.api.Example;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.ShrinkingMode;
@@ -57,6 +58,15 @@ class ComputeFuzzTest {
                         || e.path("pointer").asText().startsWith("/"), context));
             }
         }
+    }
+
+    /** Found by this fuzzer: a rejected element after a short first row once overran the row buffer. */
+    @Example
+    void aBadElementAfterAShortFirstRowIsA422NotA500() throws Exception {
+        HttpResponse<String> response = send("/v1/sampled", "application/json", "{\"method\":\"mbar\","
+                + "\"reducedPotentials\":[[],[2.5,1.0E-300,1.0E-12],[7.0,1.0E300,303.1]],\"sampleCounts\":[3]}");
+        assertEquals(422, response.statusCode(), response.body());
+        assertTrue(response.body().contains("/reducedPotentials/2/1"), response.body());
     }
 
     @AfterContainer
