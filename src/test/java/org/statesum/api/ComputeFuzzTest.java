@@ -11,9 +11,12 @@ import java.net.http.HttpClient;
 import java.net.http.HttpRequest;
 import java.net.http.HttpResponse;
 import java.time.Duration;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Random;
 import java.util.Set;
+import java.util.concurrent.CompletableFuture;
 import net.jqwik.api.Example;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
@@ -38,13 +41,21 @@ class ComputeFuzzTest {
     void everyComputeEndpointAnswersEveryBodyWithoutA5xx(@ForAll long seed) throws Exception {
         Random random = new Random(seed);
         BodyMutator bodies = new BodyMutator(ContractValidator.get().document(), random);
+        // one body per endpoint, sent together: the endpoints answer in parallel, the checks follow
+        Map<String, String> bodiesByPath = new LinkedHashMap<>();
+        Map<String, CompletableFuture<HttpResponse<String>>> answers = new LinkedHashMap<>();
         for (String path : PATHS) {
             JsonNode schema = ContractValidator.get().document().path("paths").path(path).path("post")
                     .path("requestBody").path("content").path("application/json").path("schema");
             assertFalse(schema.isMissingNode(), "the contract describes the body of " + path);
             String body = bodies.body(schema);
             String contentType = random.nextInt(40) == 0 ? "text/plain" : "application/json";
-            HttpResponse<String> response = send(path, contentType, body);
+            bodiesByPath.put(path, body);
+            answers.put(path, CLIENT.sendAsync(request(path, contentType, body), HttpResponse.BodyHandlers.ofString()));
+        }
+        for (String path : PATHS) {
+            String body = bodiesByPath.get(path);
+            HttpResponse<String> response = answers.get(path).get();
             String media = response.headers().firstValue("Content-Type").orElse("");
             int status = response.statusCode();
             String context = path + " answered " + status + " to " + abbreviate(body) + ": " + abbreviate(response.body());
@@ -79,9 +90,13 @@ class ComputeFuzzTest {
     }
 
     private static HttpResponse<String> send(String path, String contentType, String body) throws Exception {
-        return CLIENT.send(HttpRequest.newBuilder(URI.create("http://localhost:" + TestServer.shared().port() + path))
+        return CLIENT.send(request(path, contentType, body), HttpResponse.BodyHandlers.ofString());
+    }
+
+    private static HttpRequest request(String path, String contentType, String body) {
+        return HttpRequest.newBuilder(URI.create("http://localhost:" + TestServer.shared().port() + path))
                 .header("Content-Type", contentType).timeout(Duration.ofSeconds(30))
-                .POST(HttpRequest.BodyPublishers.ofString(body)).build(), HttpResponse.BodyHandlers.ofString());
+                .POST(HttpRequest.BodyPublishers.ofString(body)).build();
     }
 
     private static String abbreviate(String s) {
