@@ -19,7 +19,9 @@ public final class App {
         ObjectMapper mapper = JsonSupport.mapper(config);
         BodyReader bodies = new BodyReader(mapper, config.maxBodyBytes());
         ComputeRoutes compute = new ComputeRoutes()
-                .add("/v1/spectrum", new SpectrumController(config));
+                .add("/v1/spectrum", new SpectrumController(config))
+                .add("/v1/crystal", new CrystalController(config))
+                .add("/v1/quasi-harmonic", new QuasiHarmonicController(config));
         ConstantsController constants;
         try {
             constants = new ConstantsController(mapper);

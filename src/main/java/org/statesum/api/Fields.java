@@ -27,6 +27,10 @@ final class Fields {
         return !errors.isEmpty();
     }
 
+    int errorCount() {
+        return errors.size();
+    }
+
     void throwIfAny() {
         if (!errors.isEmpty()) {
             throw ProblemException.invalid(errors);

@@ -87,8 +87,19 @@ public final class CrystalModel {
     }
 
     static List<Warning> warnings(Crystal crystal) {
+        List<Warning> w = screenWarnings(crystal.screen());
+        Crystal.Normalisation norm = crystal.normalisation();
+        if (norm != null && norm.applied() && Math.abs(norm.factor() - 1) > Crystals.NORMALISATION_TOLERANCE) {
+            w.add(new Warning("DENSITY_RESCALED", "the density of states integrated to " + norm.integral()
+                    + " modes and was rescaled by " + norm.factor() + " to 3 x atoms = " + norm.expected(),
+                    new double[0]));
+        }
+        return w;
+    }
+
+    /** Warnings for modes left out (they hold at every temperature). */
+    static List<Warning> screenWarnings(ModeScreen s) {
         List<Warning> w = new ArrayList<>();
-        ModeScreen s = crystal.screen();
         if (s.nearZeroModes() > 0) {
             w.add(new Warning("ACOUSTIC_MODES_LEFT_OUT", s.nearZeroModes() + " mode(s) per formula unit at or "
                     + "below the tolerance of " + s.toleranceKelvin() + " K (h nu / k_B) were left out", new double[0]));
@@ -96,12 +107,6 @@ public final class CrystalModel {
         if (s.smallImaginaryModes() > 0) {
             w.add(new Warning("IMAGINARY_MODES_LEFT_OUT", s.smallImaginaryModes() + " imaginary mode(s) per formula "
                     + "unit within the tolerance were left out as numerical noise", new double[0]));
-        }
-        Crystal.Normalisation norm = crystal.normalisation();
-        if (norm != null && norm.applied() && Math.abs(norm.factor() - 1) > Crystals.NORMALISATION_TOLERANCE) {
-            w.add(new Warning("DENSITY_RESCALED", "the density of states integrated to " + norm.integral()
-                    + " modes and was rescaled by " + norm.factor() + " to 3 x atoms = " + norm.expected(),
-                    new double[0]));
         }
         return w;
     }

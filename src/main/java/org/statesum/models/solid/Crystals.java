@@ -63,7 +63,7 @@ public final class Crystals {
                     case KEPT -> kept.add(new double[] {unit.toKelvin(nu), w});
                     case NEAR_ZERO -> nearZero += w;
                     case SMALL_IMAGINARY -> imaginary += w;
-                    default -> throw new DomainException("dynamically-unstable", "/vibrations/qPoints/" + q
+                    default -> throw new DomainException("dynamically-unstable", "/qPoints/" + q
                             + "/frequencies/" + b, "imaginary mode beyond the tolerance: dynamically unstable");
                 }
             }
@@ -90,12 +90,12 @@ public final class Crystals {
         }
         double expected = 3.0 * atoms;
         if (!normalise && !(Math.abs(integral - expected) <= NORMALISATION_TOLERANCE * expected)) {
-            throw new DomainException("density-not-normalised", "/vibrations/density", "the density integrates to "
+            throw new DomainException("density-not-normalised", "/density", "the density integrates to "
                     + integral + " modes per formula unit, not 3 x atoms = " + expected + " (within "
                     + NORMALISATION_TOLERANCE + " relative); set \"normalisation\": \"apply\" to rescale it");
         }
         if (!(integral > 0)) {
-            throw new DomainException("density-not-normalised", "/vibrations/density", "the density integrates to 0");
+            throw new DomainException("density-not-normalised", "/density", "the density integrates to 0");
         }
         double factor = normalise ? expected / integral : 1.0;
         List<double[]> fine = new ArrayList<>();
@@ -113,7 +113,7 @@ public final class Crystals {
             }
         }
         if (left[2] > 0) {
-            throw new DomainException("dynamically-unstable", "/vibrations/frequencies",
+            throw new DomainException("dynamically-unstable", "/frequencies",
                     "the density has weight at imaginary frequencies beyond the tolerance: dynamically unstable");
         }
         return new Crystal("density-of-states", new Vibrations.Modes(modes(fine), modes(coarse)), atoms,

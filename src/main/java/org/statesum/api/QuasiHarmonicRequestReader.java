@@ -1,0 +1,207 @@
+package org.statesum.api;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import java.util.List;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.Set;
+import org.statesum.engine.EquationOfState;
+import org.statesum.models.solid.Crystal;
+import org.statesum.models.solid.ModeScreen;
+import org.statesum.models.solid.QuasiHarmonicCrystal;
+import org.statesum.models.solid.Vibrations;
+import org.statesum.units.EnergyUnit;
+import org.statesum.units.PressureUnit;
+import org.statesum.units.VolumeUnit;
+
+/**
+ * Validates a {@code POST /v1/quasi-harmonic} body, collecting every bad field, into a
+ * {@link QuasiHarmonicJob}; {@link #read(JsonNode, String, Fields)} reads one nested anywhere.
+ */
+final class QuasiHarmonicRequestReader {
+
+    static final List<String> FORMS = List.of("birch-murnaghan-3", "vinet", "murnaghan");
+    /** Fewest volumes: four parameters need at least one more point to leave a residual. */
+    static final int MIN_VOLUMES = 5;
+    static final int MAX_VOLUMES = 1000;
+    /** Largest |P| accepted, Pa (10 TPa: beyond the interiors of giant planets). */
+    static final double MAX_PRESSURE_PASCAL = 1e13;
+    private static final Set<String> TOP = Set.of("atomsPerFormulaUnit", "volumeUnit", "energyUnit", "volumes",
+            "staticEnergies", "phonons", "grueneisen", "pressures", "temperatures", "equationOfState", "basis",
+            "outputUnit");
+
+    private final ServiceConfig config;
+    private final VibrationsReader vibrations;
+
+    QuasiHarmonicRequestReader(ServiceConfig config) {
+        this.config = config;
+        this.vibrations = new VibrationsReader(config);
+    }
+
+    QuasiHarmonicJob read(JsonNode root) {
+        Fields fields = new Fields();
+        Optional<QuasiHarmonicJob> job = read(root, "", fields);
+        fields.throwIfAny();
+        return job.orElseThrow();
+    }
+
+    Optional<QuasiHarmonicJob> read(JsonNode root, String base, Fields fields) {
+        int start = fields.errorCount();
+        if (!fields.object(root, base, TOP)) {
+            return Optional.empty();
+        }
+        int atoms = CrystalRequestReader.atoms(root, base, fields);
+        Optional<EnergyUnit> out = CrystalRequestReader.outputUnit(root, base, fields);
+        boolean perAtom = CrystalRequestReader.perAtom(root, base, fields);
+        Optional<VolumeUnit> vUnit = fields.oneOf(fields.required(root, "volumeUnit", base), base + "/volumeUnit",
+                VolumeUnit.symbols()).flatMap(VolumeUnit::bySymbol);
+        Optional<EnergyUnit> eUnit = fields.oneOf(fields.required(root, "energyUnit", base), base + "/energyUnit",
+                EnergyUnit.symbols()).flatMap(EnergyUnit::bySymbol);
+        Optional<EquationOfState> eos = fields.oneOf(fields.required(root, "equationOfState", base),
+                base + "/equationOfState", FORMS).map(f -> EquationOfState.values()[FORMS.indexOf(f)]);
+        Optional<double[]> volumes = volumes(root, base, fields);
+        Optional<double[]> energies = fields.numbers(fields.required(root, "staticEnergies", base),
+                base + "/staticEnergies", MAX_VOLUMES);
+        if (volumes.isPresent() && energies.isPresent() && energies.get().length != volumes.get().length) {
+            fields.add(base + "/staticEnergies", "has " + energies.get().length + " elements but volumes has "
+                    + volumes.get().length);
+        }
+        Optional<double[]> pressures = pressures(root, base, fields);
+        Optional<double[]> temperatures = Optional.ofNullable(fields.required(root, "temperatures", base))
+                .flatMap(t -> TemperatureGridReader.read(t, base + "/temperatures", config.maxTemperatures(), fields));
+        Optional<Crystal[]> crystals = volumes.flatMap(v -> vUnit.flatMap(u -> phonons(root, base, atoms, v, u, fields)));
+        Optional<Vibrations[]> vib = crystals.map(cs -> java.util.Arrays.stream(cs).map(Crystal::vibrations)
+                .toArray(Vibrations[]::new));
+        if (vib.isPresent() && temperatures.isPresent() && pressures.isPresent()) {
+            long work = 0;
+            for (Vibrations x : vib.get()) {
+                work += x.modeCount();
+            }
+            work *= temperatures.get().length;
+            if (work > config.computeBudget()) {
+                fields.add(base, "modes x volumes x temperatures = " + work + " exceeds the compute budget of "
+                        + config.computeBudget() + " (STATESUM_COMPUTE_BUDGET)");
+            }
+        }
+        if (fields.errorCount() > start || vib.isEmpty() || energies.isEmpty() || eUnit.isEmpty() || eos.isEmpty()
+                || out.isEmpty() || temperatures.isEmpty() || pressures.isEmpty()) {
+            return Optional.empty();
+        }
+        double[] vm = volumes.get().clone();
+        double[] ej = energies.get().clone();
+        for (int i = 0; i < vm.length; i++) {
+            vm[i] *= vUnit.get().cubicMetresPerUnit();
+            ej[i] = eUnit.get().toJoules(ej[i]);
+        }
+        ModeScreen screen = ModeScreen.none();
+        for (Crystal c : crystals.get()) {
+            screen = screen.plus(c.screen());
+        }
+        QuasiHarmonicCrystal crystal = new QuasiHarmonicCrystal(vm, ej, EnergyUnit.conversionRelativeError(), vib.get(),
+                atoms, eos.get(), screen);
+        PressureUnit pUnit = PressureUnit.bySymbol(root.get("pressures").get("unit").textValue()).orElseThrow();
+        return Optional.of(new QuasiHarmonicJob(crystal, temperatures.get(), pressures.get(), pUnit, vUnit.get(),
+                perAtom, out.get()));
+    }
+
+    private static Optional<double[]> volumes(JsonNode root, String base, Fields fields) {
+        Optional<double[]> v = fields.numbers(fields.required(root, "volumes", base), base + "/volumes", MAX_VOLUMES);
+        if (v.isEmpty()) {
+            return v;
+        }
+        double[] a = v.get();
+        int before = fields.errorCount();
+        if (a.length < MIN_VOLUMES) {
+            fields.add(base + "/volumes", "needs at least " + MIN_VOLUMES + " volumes to fit a four-parameter form");
+        }
+        for (int i = 0; i < a.length; i++) {
+            if (!(a[i] > 0)) {
+                fields.add(base + "/volumes/" + i, "must be positive");
+            }
+            for (int k = 0; k < i; k++) {
+                if (a[k] == a[i]) {
+                    fields.add(base + "/volumes/" + i, "repeats volume " + k);
+                }
+            }
+        }
+        return fields.errorCount() == before ? v : Optional.empty();
+    }
+
+    private static Optional<double[]> pressures(JsonNode root, String base, Fields fields) {
+        JsonNode node = fields.required(root, "pressures", base);
+        String at = base + "/pressures";
+        if (node == null || !fields.object(node, at, Set.of("unit", "values"))) {
+            return Optional.empty();
+        }
+        Optional<PressureUnit> unit = fields.oneOf(fields.required(node, "unit", at), at + "/unit",
+                PressureUnit.symbols()).flatMap(PressureUnit::bySymbol);
+        Optional<double[]> values = fields.numbers(fields.required(node, "values", at), at + "/values", 100);
+        if (unit.isEmpty() || values.isEmpty()) {
+            return Optional.empty();
+        }
+        double[] pa = values.get().clone();
+        boolean good = true;
+        for (int i = 0; i < pa.length; i++) {
+            pa[i] *= unit.get().pascalsPerUnit();
+            if (!(Math.abs(pa[i]) <= MAX_PRESSURE_PASCAL)) {
+                fields.add(at + "/values/" + i, "|P| must be at most " + MAX_PRESSURE_PASCAL + " Pa");
+                good = false;
+            }
+        }
+        return good ? Optional.of(pa) : Optional.empty();
+    }
+
+    private Optional<Crystal[]> phonons(JsonNode root, String base, int atoms, double[] volumes, VolumeUnit unit,
+            Fields fields) {
+        boolean list = root.has("phonons");
+        if (list == root.has("grueneisen")) {
+            fields.add(base, "give either 'phonons' (one vibrations object per volume) or 'grueneisen'");
+            return Optional.empty();
+        }
+        if (list) {
+            JsonNode node = root.get("phonons");
+            if (!node.isArray() || node.size() != volumes.length) {
+                fields.add(base + "/phonons", "must be an array with one vibrations object per volume ("
+                        + volumes.length + ")");
+                return Optional.empty();
+            }
+            Crystal[] out = new Crystal[volumes.length];
+            boolean good = true;
+            for (int i = 0; i < out.length; i++) {
+                Optional<Crystal> c = vibrations.read(node.get(i), base + "/phonons/" + i, atoms, fields);
+                good &= c.isPresent();
+                out[i] = c.orElse(null);
+            }
+            return good ? Optional.of(out) : Optional.empty();
+        }
+        String at = base + "/grueneisen";
+        JsonNode g = root.get("grueneisen");
+        if (!fields.object(g, at, Set.of("referenceVolume", "parameter", "vibrations"))) {
+            return Optional.empty();
+        }
+        OptionalDouble ref = fields.number(fields.required(g, "referenceVolume", at), at + "/referenceVolume");
+        OptionalDouble gamma = fields.number(fields.required(g, "parameter", at), at + "/parameter");
+        if (ref.isPresent() && !(ref.getAsDouble() > 0)) {
+            fields.add(at + "/referenceVolume", "must be positive");
+            return Optional.empty();
+        }
+        if (gamma.isPresent() && !(Math.abs(gamma.getAsDouble()) <= 20)) {
+            fields.add(at + "/parameter", "must be between -20 and 20");
+            return Optional.empty();
+        }
+        Optional<Crystal> reference = vibrations.read(fields.required(g, "vibrations", at), at + "/vibrations", atoms,
+                fields);
+        if (ref.isEmpty() || gamma.isEmpty() || reference.isEmpty()) {
+            return Optional.empty();
+        }
+        // Both volumes in the request's unit: only their ratio enters.
+        Vibrations[] scaled = QuasiHarmonicCrystal.grueneisenScaled(reference.get().vibrations(), ref.getAsDouble(),
+                gamma.getAsDouble(), volumes);
+        Crystal r = reference.get();
+        Crystal[] out = new Crystal[volumes.length];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = new Crystal(r.model(), scaled[i], atoms, i == 0 ? r.screen() : ModeScreen.none(), r.normalisation());
+        }
+        return Optional.of(out);
+    }
+}
