@@ -5,7 +5,7 @@ import org.statesum.engine.PolynomialFit;
 
 /**
  * Fills one temperature of one pressure's columns from the minimum and the S(V), C_V(V) fits, with
- * first-order bounds: a fitted value's bound is sum_i |w_i| (r + delta_i) (weights of the least-squares
+ * first-order bounds: a fitted value's bound is 2 sum_i |w_i| (r + delta_i) (weights of the least-squares
  * evaluation, r the fit's largest residual, delta_i the data's bounds) plus its slope times the bound of V.
  * Column pairs (value, bound): G, H, F, S, C_V, C_P, V, B, alpha; working units K, k_B, cubic angstrom.
  */
@@ -53,7 +53,8 @@ final class ThermoAtMinimum {
         for (int i = 0; i < w.length; i++) {
             sum += Math.abs(w[i]) * (residual + bounds[i]);
         }
-        return sum;
+        // First-order, doubled as every bound here.
+        return 2 * sum;
     }
 
     private static void put(double[][] c, int col, int j, double value, double bound) {
