@@ -62,14 +62,14 @@ final class QuasiHarmonicRequestReader {
         Optional<double[]> volumes = volumes(root, base, fields);
         Optional<double[]> energies = fields.numbers(fields.required(root, "staticEnergies", base),
                 base + "/staticEnergies", MAX_VOLUMES);
-        if (volumes.isPresent() && energies.isPresent() && energies.get().length != volumes.get().length) {
-            fields.add(base + "/staticEnergies", "has " + energies.get().length + " elements but volumes has "
-                    + volumes.get().length);
+        int count = root.path("volumes").isArray() ? root.get("volumes").size() : -1;
+        if (count >= 0 && energies.isPresent() && energies.get().length != count) {
+            fields.add(base + "/staticEnergies", "has " + energies.get().length + " elements but volumes has " + count);
         }
         Optional<double[]> pressures = pressures(root, base, fields);
         Optional<double[]> temperatures = Optional.ofNullable(fields.required(root, "temperatures", base))
                 .flatMap(t -> TemperatureGridReader.read(t, base + "/temperatures", config.maxTemperatures(), fields));
-        Optional<Crystal[]> crystals = volumes.flatMap(v -> vUnit.flatMap(u -> phonons(root, base, atoms, v, u, fields)));
+        Optional<Crystal[]> crystals = phonons(root, base, atoms, count, volumes, fields);
         Optional<Vibrations[]> vib = crystals.map(cs -> java.util.Arrays.stream(cs).map(Crystal::vibrations)
                 .toArray(Vibrations[]::new));
         if (vib.isPresent() && temperatures.isPresent() && pressures.isPresent()) {
@@ -151,7 +151,7 @@ final class QuasiHarmonicRequestReader {
         return good ? Optional.of(pa) : Optional.empty();
     }
 
-    private Optional<Crystal[]> phonons(JsonNode root, String base, int atoms, double[] volumes, VolumeUnit unit,
+    private Optional<Crystal[]> phonons(JsonNode root, String base, int atoms, int count, Optional<double[]> volumes,
             Fields fields) {
         boolean list = root.has("phonons");
         if (list == root.has("grueneisen")) {
@@ -160,12 +160,12 @@ final class QuasiHarmonicRequestReader {
         }
         if (list) {
             JsonNode node = root.get("phonons");
-            if (!node.isArray() || node.size() != volumes.length) {
+            if (!node.isArray() || (count >= 0 && node.size() != count)) {
                 fields.add(base + "/phonons", "must be an array with one vibrations object per volume ("
-                        + volumes.length + ")");
+                        + Math.max(count, 0) + ")");
                 return Optional.empty();
             }
-            Crystal[] out = new Crystal[volumes.length];
+            Crystal[] out = new Crystal[node.size()];
             boolean good = true;
             for (int i = 0; i < out.length; i++) {
                 Optional<Crystal> c = vibrations.read(node.get(i), base + "/phonons/" + i, atoms, fields);
@@ -191,14 +191,14 @@ final class QuasiHarmonicRequestReader {
         }
         Optional<Crystal> reference = vibrations.read(fields.required(g, "vibrations", at), at + "/vibrations", atoms,
                 fields);
-        if (ref.isEmpty() || gamma.isEmpty() || reference.isEmpty()) {
+        if (ref.isEmpty() || gamma.isEmpty() || reference.isEmpty() || volumes.isEmpty()) {
             return Optional.empty();
         }
         // Both volumes in the request's unit: only their ratio enters.
         Vibrations[] scaled = QuasiHarmonicCrystal.grueneisenScaled(reference.get().vibrations(), ref.getAsDouble(),
-                gamma.getAsDouble(), volumes);
+                gamma.getAsDouble(), volumes.get());
         Crystal r = reference.get();
-        Crystal[] out = new Crystal[volumes.length];
+        Crystal[] out = new Crystal[scaled.length];
         for (int i = 0; i < out.length; i++) {
             out[i] = new Crystal(r.model(), scaled[i], atoms, i == 0 ? r.screen() : ModeScreen.none(), r.normalisation());
         }
