@@ -56,9 +56,10 @@ public final class QuasiHarmonicModel {
         Map<String, List<Double>> flagged = new LinkedHashMap<>();
         Sampler sampler = new Sampler(crystal);
         double[] start = null;
+        sampler.sampleAll(temperaturesKelvin);
         for (int j = 0; j < nt; j++) {
             double t = temperaturesKelvin[j];
-            sampler.sample(t);
+            sampler.select(j);
             EosFit fit = EosFit.of(crystal.equationOfState(), sampler.v, sampler.f, start);
             if (fit == null && start != null) {
                 fit = EosFit.of(crystal.equationOfState(), sampler.v, sampler.f, null);

@@ -21,7 +21,7 @@ final class Sampler {
     private final double[] e0;
     private final double[] e0b;
     private final Vibrations[] vibrations;
-    private final double[] out = new double[8];
+    private double[][][] table;
 
     Sampler(QuasiHarmonicCrystal crystal) {
         int n = crystal.volumesCubicMetre().length;
@@ -42,15 +42,39 @@ final class Sampler {
         }
     }
 
-    void sample(double temperatureKelvin) {
+    /**
+     * Evaluates the vibrations at every (volume, temperature) up front: temperatures are independent, so a
+     * large grid goes over the cores (bit-identical to a serial run); {@link #select} then picks one.
+     */
+    void sampleAll(double[] temperaturesKelvin) {
+        int nt = temperaturesKelvin.length;
+        table = new double[nt][][];
+        long terms = (long) nt * modes();
+        java.util.stream.IntStream range = java.util.stream.IntStream.range(0, nt);
+        if (terms >= org.statesum.engine.HarmonicModes.PARALLEL_TERMS) {
+            range = range.parallel();
+        }
+        range.forEach(j -> {
+            double[] o = new double[8];
+            double[][] row = new double[v.length][];
+            for (int i = 0; i < v.length; i++) {
+                vibrations[i].evaluateAt(temperaturesKelvin[j], o);
+                row[i] = o.clone();
+            }
+            table[j] = row;
+        });
+    }
+
+    /** Makes temperature {@code j} of {@link #sampleAll} current. */
+    void select(int j) {
         for (int i = 0; i < v.length; i++) {
-            vibrations[i].evaluateAt(temperatureKelvin, out);
-            f[i] = e0[i] + out[0];
-            fb[i] = e0b[i] + out[4] + U * Math.abs(f[i]);
-            s[i] = out[2];
-            sb[i] = out[6];
-            c[i] = out[3];
-            cb[i] = out[7];
+            double[] o = table[j][i];
+            f[i] = e0[i] + o[0];
+            fb[i] = e0b[i] + o[4] + U * Math.abs(f[i]);
+            s[i] = o[2];
+            sb[i] = o[6];
+            c[i] = o[3];
+            cb[i] = o[7];
         }
     }
 
