@@ -116,6 +116,20 @@ class QuasiHarmonicModelTest {
         assertTrue(r.warnings().isEmpty(), r.warnings().toString());
     }
 
+    @Test
+    void theReactionEntriesGiveGibbsEnergyPerFormulaUnit() {
+        double[] t = {300, 600};
+        QuasiHarmonicCrystal c = crystal(EquationOfState.VINET);
+        Series g = QuasiHarmonicModel.gibbsEnergy(c, t, 1e9);
+        Series full = QuasiHarmonicModel.evaluate(c, t, new double[] {1e9}, false).states().get(0).thermo()
+                .get(Quantity.GIBBS_ENERGY);
+        assertEquals(full.values()[1], g.values()[1], 0);
+        // A harmonic crystal at zero pressure: G = F, identical to the endpoint's Helmholtz energy.
+        Crystal einstein = Crystals.einstein(THETA, 0, 2);
+        assertEquals(CrystalModel.evaluate(einstein, t, false).series().get(Quantity.HELMHOLTZ_ENERGY).values()[0],
+                CrystalModel.gibbsEnergy(einstein, t).values()[0], 0);
+    }
+
     private static void check(Series s, int j, double exact, String what) {
         // The reference's own error (B by central differences, h = 1e-4 A^3: ~1e-9 relative) on top.
         assertEquals(exact, s.values()[j], s.errorBounds()[j] + 1e-8 * Math.abs(exact), what);
