@@ -64,8 +64,7 @@ final class CrystalRequestReader {
 
     /** atomsPerFormulaUnit: an integer from 1 to {@link #MAX_ATOMS}; 0 when bad. */
     static int atoms(JsonNode root, String base, Fields fields) {
-        OptionalDouble n = fields.number(fields.required(root, "atomsPerFormulaUnit", base),
-                base + "/atomsPerFormulaUnit");
+        OptionalDouble n = RequiredFields.number(fields, root, "atomsPerFormulaUnit", base);
         if (n.isEmpty()) {
             return 0;
         }

@@ -6,11 +6,13 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
 import org.statesum.engine.EquationOfState;
+import org.statesum.engine.LevelSet;
 import org.statesum.models.solid.Crystal;
 import org.statesum.models.solid.ModeScreen;
 import org.statesum.models.solid.QuasiHarmonicCrystal;
 import org.statesum.models.solid.Vibrations;
 import org.statesum.units.EnergyUnit;
+import org.statesum.units.PhysicalConstants;
 import org.statesum.units.PressureUnit;
 import org.statesum.units.VolumeUnit;
 
@@ -26,6 +28,9 @@ final class QuasiHarmonicRequestReader {
     static final int MAX_VOLUMES = 1000;
     /** Largest |P| accepted, Pa (10 TPa: beyond the interiors of giant planets). */
     static final double MAX_PRESSURE_PASCAL = 1e13;
+    /** Volumes per formula unit accepted, m^3: 1e-3 to 1e9 cubic angstrom, beyond any crystal either way. */
+    static final double MIN_VOLUME_CUBIC_METRE = 1e-33;
+    static final double MAX_VOLUME_CUBIC_METRE = 1e-21;
     private static final Set<String> TOP = Set.of("atomsPerFormulaUnit", "volumeUnit", "energyUnit", "volumes",
             "staticEnergies", "phonons", "grueneisen", "pressures", "temperatures", "equationOfState", "basis",
             "outputUnit");
@@ -53,15 +58,11 @@ final class QuasiHarmonicRequestReader {
         int atoms = CrystalRequestReader.atoms(root, base, fields);
         Optional<EnergyUnit> out = CrystalRequestReader.outputUnit(root, base, fields);
         boolean perAtom = CrystalRequestReader.perAtom(root, base, fields);
-        Optional<VolumeUnit> vUnit = fields.oneOf(fields.required(root, "volumeUnit", base), base + "/volumeUnit",
-                VolumeUnit.symbols()).flatMap(VolumeUnit::bySymbol);
-        Optional<EnergyUnit> eUnit = fields.oneOf(fields.required(root, "energyUnit", base), base + "/energyUnit",
-                EnergyUnit.symbols()).flatMap(EnergyUnit::bySymbol);
-        Optional<EquationOfState> eos = fields.oneOf(fields.required(root, "equationOfState", base),
-                base + "/equationOfState", FORMS).map(f -> EquationOfState.values()[FORMS.indexOf(f)]);
+        Optional<VolumeUnit> vUnit = RequiredFields.oneOf(fields, root, "volumeUnit", base, VolumeUnit.symbols()).flatMap(VolumeUnit::bySymbol);
+        Optional<EnergyUnit> eUnit = RequiredFields.oneOf(fields, root, "energyUnit", base, EnergyUnit.symbols()).flatMap(EnergyUnit::bySymbol);
+        Optional<EquationOfState> eos = RequiredFields.oneOf(fields, root, "equationOfState", base, FORMS).map(f -> EquationOfState.values()[FORMS.indexOf(f)]);
         Optional<double[]> volumes = volumes(root, base, fields);
-        Optional<double[]> energies = fields.numbers(fields.required(root, "staticEnergies", base),
-                base + "/staticEnergies", MAX_VOLUMES);
+        Optional<double[]> energies = RequiredFields.numbers(fields, root, "staticEnergies", base, MAX_VOLUMES);
         int count = root.path("volumes").isArray() ? root.get("volumes").size() : -1;
         if (count >= 0 && energies.isPresent() && energies.get().length != count) {
             fields.add(base + "/staticEnergies", "has " + energies.get().length + " elements but volumes has " + count);
@@ -92,6 +93,16 @@ final class QuasiHarmonicRequestReader {
         for (int i = 0; i < vm.length; i++) {
             vm[i] *= vUnit.get().cubicMetresPerUnit();
             ej[i] = eUnit.get().toJoules(ej[i]);
+            if (!(vm[i] >= MIN_VOLUME_CUBIC_METRE && vm[i] <= MAX_VOLUME_CUBIC_METRE)) {
+                fields.add(base + "/volumes/" + i, "must lie between " + MIN_VOLUME_CUBIC_METRE + " and "
+                        + MAX_VOLUME_CUBIC_METRE + " m^3 per formula unit");
+            }
+            if (!(Math.abs(ej[i] / PhysicalConstants.BOLTZMANN_J_PER_K) <= LevelSet.MAX_ABS_ENERGY_KELVIN)) {
+                fields.add(base + "/staticEnergies/" + i, "energy / k_B exceeds " + LevelSet.MAX_ABS_ENERGY_KELVIN + " K");
+            }
+        }
+        if (fields.errorCount() > start) {
+            return Optional.empty();
         }
         ModeScreen screen = ModeScreen.none();
         for (Crystal c : crystals.get()) {
@@ -105,7 +116,7 @@ final class QuasiHarmonicRequestReader {
     }
 
     private static Optional<double[]> volumes(JsonNode root, String base, Fields fields) {
-        Optional<double[]> v = fields.numbers(fields.required(root, "volumes", base), base + "/volumes", MAX_VOLUMES);
+        Optional<double[]> v = RequiredFields.numbers(fields, root, "volumes", base, MAX_VOLUMES);
         if (v.isEmpty()) {
             return v;
         }
@@ -133,9 +144,8 @@ final class QuasiHarmonicRequestReader {
         if (node == null || !fields.object(node, at, Set.of("unit", "values"))) {
             return Optional.empty();
         }
-        Optional<PressureUnit> unit = fields.oneOf(fields.required(node, "unit", at), at + "/unit",
-                PressureUnit.symbols()).flatMap(PressureUnit::bySymbol);
-        Optional<double[]> values = fields.numbers(fields.required(node, "values", at), at + "/values", 100);
+        Optional<PressureUnit> unit = RequiredFields.oneOf(fields, node, "unit", at, PressureUnit.symbols()).flatMap(PressureUnit::bySymbol);
+        Optional<double[]> values = RequiredFields.numbers(fields, node, "values", at, 100);
         if (unit.isEmpty() || values.isEmpty()) {
             return Optional.empty();
         }
@@ -179,8 +189,8 @@ final class QuasiHarmonicRequestReader {
         if (!fields.object(g, at, Set.of("referenceVolume", "parameter", "vibrations"))) {
             return Optional.empty();
         }
-        OptionalDouble ref = fields.number(fields.required(g, "referenceVolume", at), at + "/referenceVolume");
-        OptionalDouble gamma = fields.number(fields.required(g, "parameter", at), at + "/parameter");
+        OptionalDouble ref = RequiredFields.number(fields, g, "referenceVolume", at);
+        OptionalDouble gamma = RequiredFields.number(fields, g, "parameter", at);
         if (ref.isPresent() && !(ref.getAsDouble() > 0)) {
             fields.add(at + "/referenceVolume", "must be positive");
             return Optional.empty();

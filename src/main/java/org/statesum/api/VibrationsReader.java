@@ -36,7 +36,10 @@ final class VibrationsReader {
     }
 
     Optional<Crystal> read(JsonNode node, String at, int atoms, Fields fields) {
-        if (node == null || !node.isObject()) {
+        if (node == null) {
+            return Optional.empty(); // reported as missing by the caller
+        }
+        if (!node.isObject()) {
             fields.add(at, "must be an object with a 'model'");
             return Optional.empty();
         }
@@ -73,8 +76,10 @@ final class VibrationsReader {
         if (nu.isEmpty() || unit.isEmpty() || atoms <= 0) {
             return Optional.empty();
         }
-        if (!(unit.get().toKelvin(nu.getAsDouble()) <= MAX_THETA_KELVIN)) {
-            fields.add(at + "/frequency", "h nu / k_B exceeds " + MAX_THETA_KELVIN + " K");
+        double theta = unit.get().toKelvin(nu.getAsDouble());
+        if (!(theta <= MAX_THETA_KELVIN && theta >= Crystals.MIN_MODE_KELVIN)) {
+            fields.add(at + "/frequency", "h nu / k_B must be between " + Crystals.MIN_MODE_KELVIN + " and "
+                    + MAX_THETA_KELVIN + " K");
             return Optional.empty();
         }
         return Optional.of(Crystals.einstein(nu.getAsDouble(), unit.get(), atoms));
@@ -108,13 +113,12 @@ final class VibrationsReader {
             if (!fields.object(point, qAt, Set.of("weight", "frequencies"))) {
                 continue;
             }
-            OptionalDouble w = fields.number(fields.required(point, "weight", qAt), qAt + "/weight");
+            OptionalDouble w = RequiredFields.number(fields, point, "weight", qAt);
             if (w.isPresent() && !(w.getAsDouble() > 0)) {
                 fields.add(qAt + "/weight", "must be positive");
             }
             weights[q] = w.orElse(1);
-            frequencies[q] = fields.numbers(fields.required(point, "frequencies", qAt), qAt + "/frequencies",
-                    config.maxLevels()).orElse(null);
+            frequencies[q] = RequiredFields.numbers(fields, point, "frequencies", qAt, config.maxLevels()).orElse(null);
             if (frequencies[q] != null && atoms > 0 && frequencies[q].length != 3 * atoms) {
                 fields.add(qAt + "/frequencies", "has " + frequencies[q].length + " branches; a formula unit of "
                         + atoms + " atoms has 3 x " + atoms + " = " + 3 * atoms);
@@ -139,10 +143,8 @@ final class VibrationsReader {
         fields.object(node, at, DOS);
         Optional<FrequencyUnit> unit = unit(node, at, fields);
         OptionalDouble tolerance = tolerance(node, at, unit, fields);
-        Optional<double[]> grid = fields.numbers(fields.required(node, "frequencies", at), at + "/frequencies",
-                config.maxLevels());
-        Optional<double[]> density = fields.numbers(fields.required(node, "density", at), at + "/density",
-                config.maxLevels());
+        Optional<double[]> grid = RequiredFields.numbers(fields, node, "frequencies", at, config.maxLevels());
+        Optional<double[]> density = RequiredFields.numbers(fields, node, "density", at, config.maxLevels());
         boolean apply = !node.has("normalisation")
                 || fields.oneOf(node.get("normalisation"), at + "/normalisation", List.of("check", "apply"))
                         .map("apply"::equals).orElse(false);
@@ -195,16 +197,17 @@ final class VibrationsReader {
     }
 
     private static Optional<Double> theta(JsonNode node, String at, Fields fields) {
-        OptionalDouble t = fields.number(fields.required(node, "temperature", at), at + "/temperature");
-        if (t.isPresent() && !(t.getAsDouble() > 0 && t.getAsDouble() <= MAX_THETA_KELVIN)) {
-            fields.add(at + "/temperature", "must be positive and at most " + MAX_THETA_KELVIN + " K");
+        OptionalDouble t = RequiredFields.number(fields, node, "temperature", at);
+        if (t.isPresent() && !(t.getAsDouble() >= Crystals.MIN_MODE_KELVIN && t.getAsDouble() <= MAX_THETA_KELVIN)) {
+            fields.add(at + "/temperature", "must be between " + Crystals.MIN_MODE_KELVIN + " and " + MAX_THETA_KELVIN
+                    + " K");
             return Optional.empty();
         }
         return t.isPresent() ? Optional.of(t.getAsDouble()) : Optional.empty();
     }
 
     private static Optional<FrequencyUnit> unit(JsonNode node, String at, Fields fields) {
-        return fields.oneOf(fields.required(node, "frequencyUnit", at), at + "/frequencyUnit", FrequencyUnit.symbols())
+        return RequiredFields.oneOf(fields, node, "frequencyUnit", at, FrequencyUnit.symbols())
                 .flatMap(FrequencyUnit::bySymbol);
     }
 

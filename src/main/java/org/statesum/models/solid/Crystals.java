@@ -19,6 +19,12 @@ public final class Crystals {
      */
     public static final double NORMALISATION_TOLERANCE = 1e-3;
 
+    /**
+     * Kept modes need h nu / k_B of at least this, K: below it a mode is thermally a zero mode (its ln(1 - e^-x)
+     * would only add an arbitrary ln x), so it is left out with the near-zero ones.
+     */
+    public static final double MIN_MODE_KELVIN = 1e-6;
+
     private static final double CONVERSION_ERROR = 3 * 0x1.0p-53;
 
     private Crystals() {
@@ -59,7 +65,7 @@ public final class Crystals {
             double w = qWeights[q] / total;
             for (int b = 0; b < frequencies[q].length; b++) {
                 double nu = frequencies[q][b];
-                switch (ModeKind.of(nu, tolerance)) {
+                switch (kind(nu, tolerance, unit)) {
                     case KEPT -> kept.add(new double[] {unit.toKelvin(nu), w});
                     case NEAR_ZERO -> nearZero += w;
                     case SMALL_IMAGINARY -> imaginary += w;
@@ -126,12 +132,17 @@ public final class Crystals {
         if (weight == 0) {
             return;
         }
-        switch (ModeKind.of(nu, tolerance)) {
+        switch (kind(nu, tolerance, unit)) {
             case KEPT -> into.add(new double[] {unit.toKelvin(nu), weight});
             case NEAR_ZERO -> leftOut[0] += weight;
             case SMALL_IMAGINARY -> leftOut[1] += weight;
             default -> leftOut[2] += weight;
         }
+    }
+
+    private static ModeKind kind(double nu, double tolerance, FrequencyUnit unit) {
+        ModeKind kind = ModeKind.of(nu, tolerance);
+        return kind == ModeKind.KEPT && !(unit.toKelvin(nu) >= MIN_MODE_KELVIN) ? ModeKind.NEAR_ZERO : kind;
     }
 
     private static HarmonicModes modes(List<double[]> kept) {
