@@ -1,8 +1,6 @@
 package org.statesum.api;
 
-import org.statesum.engine.Series;
 import org.statesum.models.solid.Crystal;
-import org.statesum.models.solid.CrystalModel;
 import org.statesum.units.EnergyUnit;
 
 /**
@@ -14,9 +12,4 @@ import org.statesum.units.EnergyUnit;
  * @param outputUnit the energy unit of the answer
  */
 record CrystalJob(Crystal crystal, double[] temperaturesKelvin, boolean perAtom, EnergyUnit outputUnit) {
-
-    /** G(T) per formula unit in J at zero pressure (G = F; the volume is fixed): for reaction species. */
-    Series gibbsEnergyJoulePerFormulaUnit() {
-        return CrystalModel.gibbsEnergy(crystal, temperaturesKelvin);
-    }
 }

@@ -38,7 +38,7 @@ final class CrystalRequestReader {
 
     /** Reads a crystal body at {@code base} (a JSON Pointer, "" for the root); empty when anything is bad. */
     Optional<CrystalJob> read(JsonNode root, String base, Fields fields) {
-        int start = fields.errorCount();
+        int start = fields.count();
         if (!fields.object(root, base, TOP)) {
             return Optional.empty();
         }
@@ -56,7 +56,7 @@ final class CrystalRequestReader {
                         + config.computeBudget() + " (STATESUM_COMPUTE_BUDGET)");
             }
         }
-        if (fields.errorCount() > start || crystal.isEmpty() || temperatures.isEmpty() || unit.isEmpty()) {
+        if (fields.count() > start || crystal.isEmpty() || temperatures.isEmpty() || unit.isEmpty()) {
             return Optional.empty();
         }
         return Optional.of(new CrystalJob(crystal.get(), temperatures.get(), perAtom, unit.get()));

@@ -27,7 +27,8 @@ final class Fields {
         return !errors.isEmpty();
     }
 
-    int errorCount() {
+    /** How many problems have been collected so far (to tell whether one part of a request added any). */
+    int count() {
         return errors.size();
     }
 

@@ -1,8 +1,6 @@
 package org.statesum.api;
 
-import org.statesum.engine.Series;
 import org.statesum.models.solid.QuasiHarmonicCrystal;
-import org.statesum.models.solid.QuasiHarmonicModel;
 import org.statesum.units.EnergyUnit;
 import org.statesum.units.PressureUnit;
 import org.statesum.units.VolumeUnit;
@@ -20,9 +18,4 @@ import org.statesum.units.VolumeUnit;
  */
 record QuasiHarmonicJob(QuasiHarmonicCrystal crystal, double[] temperaturesKelvin, double[] pressuresPascal,
         PressureUnit pressureUnit, VolumeUnit volumeUnit, boolean perAtom, EnergyUnit outputUnit) {
-
-    /** G(T, P) per formula unit in J at the first pressure given: for reaction species. */
-    Series gibbsEnergyJoulePerFormulaUnit() {
-        return QuasiHarmonicModel.gibbsEnergy(crystal, temperaturesKelvin, pressuresPascal[0]);
-    }
 }

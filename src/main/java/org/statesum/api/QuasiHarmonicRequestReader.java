@@ -51,7 +51,7 @@ final class QuasiHarmonicRequestReader {
     }
 
     Optional<QuasiHarmonicJob> read(JsonNode root, String base, Fields fields) {
-        int start = fields.errorCount();
+        int start = fields.count();
         if (!fields.object(root, base, TOP)) {
             return Optional.empty();
         }
@@ -84,7 +84,7 @@ final class QuasiHarmonicRequestReader {
                         + config.computeBudget() + " (STATESUM_COMPUTE_BUDGET)");
             }
         }
-        if (fields.errorCount() > start || vib.isEmpty() || energies.isEmpty() || eUnit.isEmpty() || eos.isEmpty()
+        if (fields.count() > start || vib.isEmpty() || energies.isEmpty() || eUnit.isEmpty() || eos.isEmpty()
                 || out.isEmpty() || temperatures.isEmpty() || pressures.isEmpty()) {
             return Optional.empty();
         }
@@ -101,7 +101,7 @@ final class QuasiHarmonicRequestReader {
                 fields.add(base + "/staticEnergies/" + i, "energy / k_B exceeds " + LevelSet.MAX_ABS_ENERGY_KELVIN + " K");
             }
         }
-        if (fields.errorCount() > start) {
+        if (fields.count() > start) {
             return Optional.empty();
         }
         ModeScreen screen = ModeScreen.none();
@@ -121,7 +121,7 @@ final class QuasiHarmonicRequestReader {
             return v;
         }
         double[] a = v.get();
-        int before = fields.errorCount();
+        int before = fields.count();
         if (a.length < MIN_VOLUMES) {
             fields.add(base + "/volumes", "needs at least " + MIN_VOLUMES + " volumes to fit a four-parameter form");
         }
@@ -135,7 +135,7 @@ final class QuasiHarmonicRequestReader {
                 }
             }
         }
-        return fields.errorCount() == before ? v : Optional.empty();
+        return fields.count() == before ? v : Optional.empty();
     }
 
     private static Optional<double[]> pressures(JsonNode root, String base, Fields fields) {

@@ -91,7 +91,7 @@ final class VibrationsReader {
     }
 
     private Optional<Crystal> phonons(JsonNode node, String at, int atoms, Fields fields) {
-        int start = fields.errorCount();
+        int start = fields.count();
         fields.object(node, at, PHONONS);
         Optional<FrequencyUnit> unit = unit(node, at, fields);
         OptionalDouble tolerance = tolerance(node, at, unit, fields);
@@ -131,7 +131,7 @@ final class VibrationsReader {
         if (total > config.maxLevels()) {
             fields.add(at + "/qPoints", total + " frequencies exceed the limit of " + config.maxLevels());
         }
-        if (fields.errorCount() > start || unit.isEmpty() || tolerance.isEmpty() || atoms <= 0) {
+        if (fields.count() > start || unit.isEmpty() || tolerance.isEmpty() || atoms <= 0) {
             return Optional.empty();
         }
         return build(at, fields, () -> Crystals.phonons(frequencies, weights, unit.get(), tolerance.getAsDouble(),
@@ -139,7 +139,7 @@ final class VibrationsReader {
     }
 
     private Optional<Crystal> density(JsonNode node, String at, int atoms, Fields fields) {
-        int start = fields.errorCount();
+        int start = fields.count();
         fields.object(node, at, DOS);
         Optional<FrequencyUnit> unit = unit(node, at, fields);
         OptionalDouble tolerance = tolerance(node, at, unit, fields);
@@ -171,7 +171,7 @@ final class VibrationsReader {
                         + "density: the structure is dynamically unstable");
             }
         }
-        if (fields.errorCount() > start || unit.isEmpty() || tolerance.isEmpty() || atoms <= 0) {
+        if (fields.count() > start || unit.isEmpty() || tolerance.isEmpty() || atoms <= 0) {
             return Optional.empty();
         }
         return build(at, fields, () -> Crystals.densityOfStates(g, d, unit.get(), tolerance.getAsDouble(), atoms,
@@ -225,6 +225,6 @@ final class VibrationsReader {
     }
 
     private static int errorCount(Fields fields) {
-        return fields.errorCount();
+        return fields.count();
     }
 }

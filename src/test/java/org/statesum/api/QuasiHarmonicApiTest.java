@@ -43,6 +43,30 @@ class QuasiHarmonicApiTest {
     }
 
     @Test
+    void aReactionBetweenTheDemoPolymorphsFindsTheirCrossing() throws IOException {
+        // G(beta) - G(alpha) at 0 GPa is +0.316 kJ/mol at 400 K and -0.661 kJ/mol at 500 K on the
+        // quasi-harmonic endpoint (README table), so the crossing lies between, near 432 K by linear
+        // interpolation; the reaction's root finder must land in that interval.
+        server.request().contentType("application/json").body(example("tessaride-alpha-to-beta.json"))
+                .post("/v1/reaction")
+                .then().statusCode(200)
+                .body("signChanges", hasSize(1))
+                .body("signChanges[0].temperature", closeTo(432, 10))
+                .body("signChanges[0].direction", equalTo("positive-to-negative"))
+                .body("system.species[0].standardState", org.hamcrest.Matchers.containsString("quasi-harmonic"));
+    }
+
+    @Test
+    void aQuasiHarmonicSpeciesTakesOnePressure() throws IOException {
+        String body = example("tessaride-alpha-to-beta.json").replaceFirst("\"values\": \\[\\s*0\\s*\\]",
+                "\"values\": [0, 1]");
+        server.request().contentType("application/json").body(body)
+                .post("/v1/reaction")
+                .then().statusCode(422)
+                .body("errors.pointer", hasItem("/species/0/input/pressures/values"));
+    }
+
+    @Test
     void aMinimumOutsideTheSampledVolumesIsFlagged() throws IOException {
         String body = example("tessaride-alpha-qha.json").replace("\"values\": [\n      0,\n      2\n    ]",
                 "\"values\": [40]");
