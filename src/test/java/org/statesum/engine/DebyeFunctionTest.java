@@ -14,8 +14,10 @@ class DebyeFunctionTest {
     private static final double EPS = Math.ulp(1.0);
 
     /**
-     * Handbook values, Abramowitz and Stegun Table 27.1 (D_3 column), six decimals: recalled from memory,
-     * so each is also checked here against the 30-digit reference below.
+     * Six-decimal values in the layout of the handbook table (Abramowitz and Stegun, Table 27.1, the n = 3
+     * column). The table itself was not at hand: these are the 30-digit references below rounded to six
+     * decimals, and agree with the table's entries as recalled from memory (D_3(1) = 0.674416,
+     * D_3(2) = 0.441128).
      */
     @ParameterizedTest
     @CsvSource({"0.5, 0.824963", "1.0, 0.674416", "2.0, 0.441128", "3.0, 0.283580", "5.0, 0.117597", "10.0, 0.019296"})
