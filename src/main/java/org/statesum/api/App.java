@@ -17,7 +17,7 @@ public final class App {
 
     public static Javalin create(ServiceConfig config) {
         ObjectMapper mapper = JsonSupport.mapper(config);
-        BodyReader bodies = new BodyReader(mapper, config.maxBodyBytes());
+        BodyReader bodies = new BodyReader(mapper, config);
         ComputeRoutes compute = new ComputeRoutes()
                 .add("/v1/spectrum", new SpectrumController(config));
         ConstantsController constants;
@@ -34,6 +34,7 @@ public final class App {
             javalin.startup.showOldJavalinVersionWarning = false;
             javalin.jetty.port = config.port();
             javalin.http.maxRequestSize = config.maxBodyBytes();
+            javalin.http.prefer405over404 = true;
             problems.register(javalin);
             compute.all().forEach((path, endpoint) -> javalin.routes.post(path,
                     ctx -> Responses.json(ctx, mapper, endpoint.answer(bodies.read(ctx)))));

@@ -6,40 +6,50 @@ import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.exc.StreamConstraintsException;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.exc.MismatchedInputException;
 import io.javalin.http.Context;
 import java.io.IOException;
 import java.io.InputStream;
 import java.util.List;
+import java.util.Locale;
+import java.util.regex.Pattern;
 
 /**
  * Reads a request body into a JSON tree: 415 unless the media type is JSON, 413 beyond the size
- * limit, 400 for anything the parser will not accept (syntax, NaN tokens, duplicate keys, nesting or
- * string limits), with the JSON Pointer of the place where reading stopped.
+ * limit (declared or actually sent), 400 for anything the parser will not accept (syntax, duplicate
+ * keys, nesting, string or number limits), with the JSON Pointer of the place where reading stopped,
+ * and 422 naming every NaN, Infinity or out-of-range number ({@link FiniteNumbers}).
  */
 final class BodyReader {
 
-    private final ObjectMapper mapper;
-    private final long maxBodyBytes;
+    /** Words that betray the parser's internals; a message containing one is replaced by a plain one. */
+    private static final Pattern INTERNAL = Pattern.compile(
+            "jackson|feature|java|class|source:|redacted|jsonnode|token \\(of type|`", Pattern.CASE_INSENSITIVE);
 
-    BodyReader(ObjectMapper mapper, long maxBodyBytes) {
+    private final ObjectMapper mapper;
+    private final ServiceConfig config;
+
+    BodyReader(ObjectMapper mapper, ServiceConfig config) {
         this.mapper = mapper;
-        this.maxBodyBytes = maxBodyBytes;
+        this.config = config;
     }
 
     JsonNode read(Context ctx) {
         requireJson(ctx.contentType());
-        long declared = ctx.contentLength();
-        if (declared > maxBodyBytes) {
+        if (ctx.contentLength() > config.maxBodyBytes()) {
             throw tooLarge();
         }
-        byte[] body = readBounded(ctx);
-        if (body.length == 0) {
-            throw ProblemException.unreadable("the request body is empty", "");
-        }
+        JsonNode root = parse(readBounded(ctx));
+        FiniteNumbers.check(root);
+        return root;
+    }
+
+    /** Parses a complete body; 400 for an empty body or anything the parser refuses. */
+    JsonNode parse(byte[] body) {
         try {
-            JsonNode root = mapper.readTree(body);
+            JsonNode root = body.length == 0 ? null : mapper.readTree(body);
             if (root == null || root.isMissingNode()) {
-                throw ProblemException.unreadable("the request body is empty", "");
+                throw ProblemException.unreadable("the request body is empty; send one JSON object", "");
             }
             return root;
         } catch (StreamConstraintsException e) {
@@ -47,19 +57,22 @@ final class BodyReader {
         } catch (JsonParseException e) {
             throw ProblemException.unreadable("the body is not valid JSON at line " + e.getLocation().getLineNr()
                     + ", column " + e.getLocation().getColumnNr() + ": " + clean(e.getOriginalMessage()), pointerOf(e));
+        } catch (MismatchedInputException e) {
+            throw ProblemException.unreadable("the body holds more than one JSON value; send exactly one object", "");
         } catch (JsonProcessingException e) {
             throw ProblemException.unreadable("the body is not valid JSON: " + clean(e.getOriginalMessage()),
                     pointerOf(e));
         } catch (IOException e) {
-            throw ProblemException.unreadable("the body could not be read", "");
+            throw ProblemException.unreadable("the request body could not be read", "");
         }
     }
 
     /** Reads at most the limit plus one byte, so a body without Content-Length cannot exhaust memory. */
     private byte[] readBounded(Context ctx) {
+        long limit = config.maxBodyBytes();
         try (InputStream in = ctx.req().getInputStream()) {
-            byte[] body = in.readNBytes((int) Math.min(Integer.MAX_VALUE - 8, maxBodyBytes + 1));
-            if (body.length > maxBodyBytes) {
+            byte[] body = in.readNBytes((int) Math.min(Integer.MAX_VALUE - 8, limit + 1));
+            if (body.length > limit) {
                 throw tooLarge();
             }
             return body;
@@ -69,13 +82,14 @@ final class BodyReader {
     }
 
     private ProblemException tooLarge() {
+        long limit = config.maxBodyBytes();
         return new ProblemException(Problem.of("body-too-large", "Request body too large", 413,
-                "the request body exceeds the limit of " + maxBodyBytes + " bytes (STATESUM_MAX_BODY_BYTES)",
-                List.of(new FieldError("", "body larger than " + maxBodyBytes + " bytes"))));
+                "the request body exceeds the limit of " + limit + " bytes (STATESUM_MAX_BODY_BYTES)",
+                List.of(new FieldError("", "body larger than " + limit + " bytes"))));
     }
 
     static void requireJson(String contentType) {
-        String type = contentType == null ? "" : contentType.split(";", 2)[0].trim().toLowerCase(java.util.Locale.ROOT);
+        String type = contentType == null ? "" : contentType.split(";", 2)[0].trim().toLowerCase(Locale.ROOT);
         if (!type.equals("application/json")) {
             throw new ProblemException(Problem.of("unsupported-media-type", "Unsupported media type", 415,
                     "send the body as application/json (got '" + (contentType == null ? "" : contentType) + "')",
@@ -83,29 +97,37 @@ final class BodyReader {
         }
     }
 
-    private static String limitName(StreamConstraintsException e) {
-        String message = String.valueOf(e.getOriginalMessage());
+    private String limitName(StreamConstraintsException e) {
+        String message = String.valueOf(e.getOriginalMessage()).toLowerCase(Locale.ROOT);
         if (message.contains("nesting")) {
-            return "nesting too deep (STATESUM_MAX_NESTING_DEPTH)";
+            return "nesting deeper than " + config.maxNestingDepth() + " levels (STATESUM_MAX_NESTING_DEPTH)";
         }
-        if (message.contains("String")) {
-            return "string too long (STATESUM_MAX_STRING_LENGTH)";
+        if (message.contains("name")) {
+            return "a member name longer than " + config.maxStringLength()
+                    + " characters (STATESUM_MAX_STRING_LENGTH)";
         }
-        if (message.contains("Number")) {
-            return "number too long (1000 characters)";
+        if (message.contains("string")) {
+            return "a string longer than " + config.maxStringLength() + " characters (STATESUM_MAX_STRING_LENGTH)";
         }
-        return "document too large";
+        if (message.contains("number")) {
+            return "a number longer than " + JsonSupport.MAX_NUMBER_LENGTH + " characters";
+        }
+        return "a body longer than " + config.maxBodyBytes() + " bytes (STATESUM_MAX_BODY_BYTES)";
     }
 
-    /** The parser's message without its advice on parser features or anything after the first line. */
+    /**
+     * The parser's message reduced to what a client can use: its first line, without advice on parser
+     * features, source locations or type names; a message that still mentions internals becomes
+     * "syntax error".
+     */
     static String clean(String message) {
-        String text = message == null ? "syntax error" : message.split("\n", 2)[0];
-        int advice = text.indexOf(": enable");
-        if (advice < 0) {
-            advice = text.indexOf("; enable");
+        String text = message == null ? "" : message.split("\n", 2)[0];
+        for (String cut : new String[] {": enable", "; enable", " (bound as", " at [Source"}) {
+            int at = text.indexOf(cut);
+            text = at >= 0 ? text.substring(0, at) : text;
         }
-        text = advice >= 0 ? text.substring(0, advice) : text;
-        return text.replaceAll("\\(for [^)]*\\)", "").replace("`", "'").trim();
+        text = text.replaceAll("\\(for [^)]*\\)", "").replaceAll("\\[Source:[^]]*]", "").trim();
+        return text.isEmpty() || INTERNAL.matcher(text).find() ? "syntax error" : text;
     }
 
     private static String pointerOf(JsonProcessingException e) {

@@ -18,6 +18,10 @@ final class ProblemMapper {
 
     private static final Logger LOG = LoggerFactory.getLogger(ProblemMapper.class);
 
+    private static final byte[] INTERNAL_ERROR = ("{\"type\":\"https://statesum.org/problems/internal-error\","
+            + "\"title\":\"Internal error\",\"status\":500,\"detail\":\"the service failed to answer this request; "
+            + "it has been logged\",\"errors\":[]}").getBytes(java.nio.charset.StandardCharsets.UTF_8);
+
     private final ObjectMapper mapper;
 
     ProblemMapper(ObjectMapper mapper) {
@@ -33,6 +37,17 @@ final class ProblemMapper {
             LOG.error("unhandled exception on {} {}", ctx.method(), ctx.path(), e);
             write(ctx, fromStatus(500));
         });
+        // An Error (out of memory, say) bypasses the exception mappers; answer it with the same bare 500.
+        config.router.javaLangErrorHandler((res, error) -> {
+            LOG.error("unhandled error", error);
+            try {
+                res.setStatus(500);
+                res.setContentType(Problem.MEDIA_TYPE);
+                res.getOutputStream().write(INTERNAL_ERROR);
+            } catch (java.io.IOException | IllegalStateException e) {
+                LOG.error("could not write a problem", e);
+            }
+        });
         for (int status : new int[] {404, 405}) {
             config.routes.error(status, "*", ctx -> {
                 if (!Problem.MEDIA_TYPE.equals(ctx.res().getContentType())) {
@@ -47,8 +62,7 @@ final class ProblemMapper {
             ctx.status(problem.status()).contentType(Problem.MEDIA_TYPE).result(mapper.writeValueAsBytes(problem));
         } catch (Exception e) {
             LOG.error("could not write a problem", e);
-            ctx.status(500).contentType(Problem.MEDIA_TYPE).result("{\"type\":\"about:blank\",\"title\":"
-                    + "\"Internal error\",\"status\":500,\"detail\":\"internal error\",\"errors\":[]}");
+            ctx.status(500).contentType(Problem.MEDIA_TYPE).result(INTERNAL_ERROR);
         }
     }
 

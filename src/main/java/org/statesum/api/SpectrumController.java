@@ -26,6 +26,7 @@ final class SpectrumController implements ComputeEndpoint {
         system.put("statistics", job.particles().statistics() == ParticleStatistics.INDISTINGUISHABLE
                 ? "indistinguishable" : "distinguishable");
         system.put("basis", job.particles().perParticle() ? "per-particle" : "total");
-        return ThermoResponse.of(result, job.outputUnit(), system);
+        return ThermoResponse.of(result, job.outputUnit(), system,
+                job.particles().perParticle() ? 1 : job.particles().count());
     }
 }

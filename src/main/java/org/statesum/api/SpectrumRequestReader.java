@@ -61,7 +61,9 @@ final class SpectrumRequestReader {
         boolean hasG = node.has("degeneracies");
         boolean hasLogG = node.has("logDegeneracies");
         if (hasG && hasLogG) {
-            fields.add("/levels", "give 'degeneracies' or 'logDegeneracies', not both");
+            fields.add("/levels/logDegeneracies", "give 'degeneracies' or 'logDegeneracies', not both");
+            fields.numbers(node.get("degeneracies"), "/levels/degeneracies", config.maxLevels())
+                    .ifPresent(g -> checkWeights(g, false, fields));
             return Optional.empty();
         }
         String gName = hasLogG ? "logDegeneracies" : "degeneracies";
@@ -124,12 +126,12 @@ final class SpectrumRequestReader {
     }
 
     private static Particles readParticles(JsonNode root, Fields fields) {
+        boolean perParticle = root.has("basis")
+                && fields.oneOf(root.get("basis"), "/basis", BASES).map("per-particle"::equals).orElse(false);
         JsonNode node = root.get("particles");
         if (node == null) {
             return Particles.single();
         }
-        boolean perParticle = root.has("basis")
-                && fields.oneOf(root.get("basis"), "/basis", BASES).map("per-particle"::equals).orElse(false);
         if (!fields.object(node, "/particles", Set.of("count", "statistics"))) {
             return Particles.single();
         }
@@ -139,7 +141,7 @@ final class SpectrumRequestReader {
         if (count.isPresent()) {
             double n = count.getAsDouble();
             if (!(n >= 1 && n <= CompositeSystem.MAX_PARTICLES && Math.rint(n) == n)) {
-                fields.add("/particles/count", "must be an integer from 1 to " + CompositeSystem.MAX_PARTICLES);
+                fields.add("/particles/count", "must be an integer from 1 to 1e30");
             }
         }
         if (fields.hasErrors() || count.isEmpty() || statistics.isEmpty()) {
