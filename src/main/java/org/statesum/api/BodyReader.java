@@ -36,7 +36,13 @@ final class BodyReader {
 
     JsonNode read(Context ctx) {
         requireJson(ctx.contentType());
-        if (ctx.contentLength() > config.maxBodyBytes()) {
+        long declared = ctx.contentLength();
+        if (declared > config.maxBodyBytes()) {
+            // A client that waits for "100 Continue" has sent nothing; one that did not is sending now
+            // and would see a broken pipe instead of the answer, so a modest excess is read and dropped.
+            if (!expectsContinue(ctx) && declared <= config.maxBodyBytes() + drainLimit()) {
+                drain(ctx, declared);
+            }
             throw tooLarge();
         }
         JsonNode root = parse(readBounded(ctx));
@@ -73,11 +79,43 @@ final class BodyReader {
         try (InputStream in = ctx.req().getInputStream()) {
             byte[] body = in.readNBytes((int) Math.min(Integer.MAX_VALUE - 8, limit + 1));
             if (body.length > limit) {
+                drainStream(in, drainLimit());
                 throw tooLarge();
             }
             return body;
         } catch (IOException e) {
             throw ProblemException.unreadable("the request body could not be read", "");
+        }
+    }
+
+    /** How much of an oversized body is read and dropped so that the client gets the 413: the limit again. */
+    private long drainLimit() {
+        return config.maxBodyBytes();
+    }
+
+    private static boolean expectsContinue(Context ctx) {
+        String expect = ctx.header("Expect");
+        return expect != null && expect.trim().equalsIgnoreCase("100-continue");
+    }
+
+    private static void drain(Context ctx, long bytes) {
+        try (InputStream in = ctx.req().getInputStream()) {
+            drainStream(in, bytes);
+        } catch (IOException e) {
+            // the client went away; the 413 is written if it still can be
+        }
+    }
+
+    /** Reads and drops up to {@code bytes} bytes, 8 KiB at a time. */
+    private static void drainStream(InputStream in, long bytes) {
+        byte[] sink = new byte[8192];
+        long left = bytes;
+        try {
+            for (int n; left > 0 && (n = in.read(sink, 0, (int) Math.min(sink.length, left))) > 0; ) {
+                left -= n;
+            }
+        } catch (IOException e) {
+            // the client went away; nothing more to drop
         }
     }
 
@@ -99,17 +137,17 @@ final class BodyReader {
 
     private String limitName(StreamConstraintsException e) {
         String message = String.valueOf(e.getOriginalMessage()).toLowerCase(Locale.ROOT);
-        if (message.contains("nesting")) {
+        if (message.startsWith("document nesting")) {
             return "nesting deeper than " + config.maxNestingDepth() + " levels (STATESUM_MAX_NESTING_DEPTH)";
         }
-        if (message.contains("name")) {
+        if (message.startsWith("name length")) {
             return "a member name longer than " + config.maxStringLength()
                     + " characters (STATESUM_MAX_STRING_LENGTH)";
         }
-        if (message.contains("string")) {
+        if (message.startsWith("string value length")) {
             return "a string longer than " + config.maxStringLength() + " characters (STATESUM_MAX_STRING_LENGTH)";
         }
-        if (message.contains("number")) {
+        if (message.startsWith("number value length")) {
             return "a number longer than " + JsonSupport.MAX_NUMBER_LENGTH + " characters";
         }
         return "a body longer than " + config.maxBodyBytes() + " bytes (STATESUM_MAX_BODY_BYTES)";
