@@ -1,0 +1,112 @@
+package org.statesum.api;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import io.restassured.path.json.JsonPath;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+import org.junit.jupiter.api.Test;
+import org.statesum.testing.TestServer;
+
+/**
+ * Answers in every output unit, checked through the API against published conversion factors:
+ * CODATA 2018 (Tiesinga et al., Rev. Mod. Phys. 93, 025010 (2021)): 1 hartree = 27.211386245988 eV,
+ * 1 eV = 8065.543937 cm-1 = 96.485332 kJ/mol = 11604.51812 K, e = 1.602176634e-19 J (exact),
+ * R = 8.314462618 J/(mol K); and the thermochemical calorie, 4.184 J (exact by definition).
+ * Energies follow the output unit; entropy and heat capacity follow it per kelvin (k_B for K).
+ */
+class AnswerUnitsApiTest {
+
+    /** A three-level set in eV, with degeneracies, on three temperatures. */
+    private static final String LEVELS = "{\"levels\": {\"energies\": [0, 0.01, 0.025], \"degeneracies\": [1, 3, 5]}, "
+            + "\"energyUnit\": \"eV\", \"temperatures\": {\"values\": [50, 300, 1000]}";
+
+    private final TestServer server = TestServer.shared();
+
+    private JsonPath answer(String extra) {
+        return server.request().contentType("application/json").body(LEVELS + extra + "}").post("/v1/spectrum")
+                .then().statusCode(200).extract().jsonPath();
+    }
+
+    /**
+     * The quoted factors carry 8 to 14 significant digits; the tolerance is half a unit in the last
+     * quoted digit, relative, plus the answers' own rounding (far smaller).
+     */
+    @ParameterizedTest(name = "{0}: energies x {1}, entropies in {3} x {2}")
+    @CsvSource({
+        "J,        1.602176634e-19,             1.602176634e-19,             J/K,         1e-15",
+        "meV,      1000,                        1000,                        meV/K,       1e-15",
+        "hartree,  0.036749322175655,           0.036749322175655,           hartree/K,   1e-13",
+        "cm-1,     8065.543937,                 8065.543937,                 cm-1/K,      1e-10",
+        "K,        11604.51812,                 11604.51812,                 k_B,         1e-9",
+        "kJ/mol,   96.485332,                   96485.332,                   J/(mol K),   6e-9",
+        "kcal/mol, 23.060547801147,             23060.547801147,             cal/(mol K), 6e-9"})
+    void everyOutputUnitIsTheElectronvoltAnswerTimesThePublishedFactor(String unit, double energyFactor,
+            double entropyFactor, String entropyUnit, double relativeTolerance) {
+        // 1 / 27.211386245988 = 0.036749322175655 (to the 14 digits of the quoted factor);
+        // 96.485332 / 4.184 = 23.060547801147 (the calorie is exact).
+        JsonPath eV = answer("");
+        JsonPath other = answer(", \"outputUnit\": \"" + unit + "\"");
+        assertEquals(unit, other.getString("helmholtzEnergy.unit"));
+        assertEquals(unit, other.getString("internalEnergy.unit"));
+        assertEquals(entropyUnit, other.getString("entropy.unit"));
+        assertEquals(entropyUnit, other.getString("isochoricHeatCapacity.unit"));
+        assertEquals("1", other.getString("logPartitionFunction.unit"));
+        for (int j = 0; j < 3; j++) {
+            check(eV, other, "helmholtzEnergy", j, energyFactor, relativeTolerance);
+            check(eV, other, "internalEnergy", j, energyFactor, relativeTolerance);
+            check(eV, other, "entropy", j, entropyFactor, relativeTolerance);
+            check(eV, other, "isochoricHeatCapacity", j, entropyFactor, relativeTolerance);
+            assertEquals(eV.getDouble("logPartitionFunction.values[" + j + "]"),
+                    other.getDouble("logPartitionFunction.values[" + j + "]"), 0.0);
+        }
+    }
+
+    private static void check(JsonPath eV, JsonPath other, String series, int j, double factor, double tolerance) {
+        double expected = eV.getDouble(series + ".values[" + j + "]") * factor;
+        double actual = other.getDouble(series + ".values[" + j + "]");
+        assertEquals(expected, actual, Math.abs(expected) * tolerance + 1e-300, series + "[" + j + "]");
+    }
+
+    @Test
+    void aTwofoldGroundLevelHasEntropyRLn2PerMole() {
+        // S = k_B ln 2 per particle; per mole R ln 2 with R = 8.314462618 J/(mol K) (CODATA 2018),
+        // 5.763172... J/(mol K); in cal/(mol K) divided by 4.184; in k_B, ln 2.
+        String body = "{\"levels\": {\"energies\": [0], \"degeneracies\": [2]}, \"energyUnit\": \"K\", "
+                + "\"temperatures\": {\"values\": [300]}, \"outputUnit\": ";
+        assertEquals(8.314462618 * Math.log(2), entropy(body + "\"kJ/mol\"}"), 5e-10 * 5.77);
+        assertEquals(8.314462618 * Math.log(2) / 4.184, entropy(body + "\"kcal/mol\"}"), 5e-10 * 1.38);
+        assertEquals(Math.log(2), entropy(body + "\"K\"}"), 4 * Math.ulp(1.0));
+    }
+
+    @Test
+    void molarUnitsArePerMoleOfParticlesOnEitherBasis() {
+        String system = "{\"levels\": {\"energies\": [0, 1, 2]}, \"energyUnit\": \"kJ/mol\", "
+                + "\"temperatures\": {\"values\": [100, 400]}, "
+                + "\"particles\": {\"count\": 1000, \"statistics\": \"indistinguishable\"}, \"basis\": ";
+        JsonPath total = post(system + "\"total\"}");
+        JsonPath perParticle = post(system + "\"per-particle\"}");
+        JsonPath totalEv = post(system + "\"total\", \"outputUnit\": \"eV\"}");
+        JsonPath perParticleEv = post(system + "\"per-particle\", \"outputUnit\": \"eV\"}");
+        for (String series : new String[] {"helmholtzEnergy", "internalEnergy", "entropy", "isochoricHeatCapacity"}) {
+            for (int j = 0; j < 2; j++) {
+                String path = series + ".values[" + j + "]";
+                double molar = perParticle.getDouble(path);
+                // Two extra roundings (1/N and the product) at most: 4 ulps of headroom.
+                assertEquals(molar, total.getDouble(path), 4 * Math.ulp(molar), path);
+                // A per-particle unit keeps the basis: the total is N times the per-particle value.
+                assertEquals(1000 * perParticleEv.getDouble(path), totalEv.getDouble(path),
+                        1e-12 * Math.abs(totalEv.getDouble(path)), path);
+            }
+        }
+    }
+
+    private JsonPath post(String body) {
+        return server.request().contentType("application/json").body(body).post("/v1/spectrum")
+                .then().statusCode(200).extract().jsonPath();
+    }
+
+    private double entropy(String body) {
+        return post(body).getDouble("entropy.values[0]");
+    }
+}
