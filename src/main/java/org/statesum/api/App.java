@@ -37,7 +37,7 @@ public final class App {
             javalin.http.prefer405over404 = true;
             problems.register(javalin);
             compute.all().forEach((path, endpoint) -> javalin.routes.post(path,
-                    ctx -> Responses.json(ctx, mapper, endpoint.answer(bodies.read(ctx)))));
+                    ctx -> Responses.json(ctx, mapper, FiniteNumbers.answer(bodies.read(ctx), endpoint))));
             javalin.routes.get("/v1/constants", constants::get);
             javalin.routes.get("/openapi.yaml", ctx -> ctx.contentType("application/yaml").result(openApi));
             javalin.routes.get("/health/live", ctx -> ctx.contentType("application/json").result(live));

@@ -17,8 +17,8 @@ import java.util.regex.Pattern;
 /**
  * Reads a request body into a JSON tree: 415 unless the media type is JSON, 413 beyond the size
  * limit (declared or actually sent), 400 for anything the parser will not accept (syntax, duplicate
- * keys, nesting, string or number limits), with the JSON Pointer of the place where reading stopped,
- * and 422 naming every NaN, Infinity or out-of-range number ({@link FiniteNumbers}).
+ * keys, nesting, string or number limits), with the JSON Pointer of the place where reading stopped.
+ * NaN and Infinity tokens are read; {@link FiniteNumbers} answers them with a 422.
  */
 final class BodyReader {
 
@@ -45,9 +45,7 @@ final class BodyReader {
             }
             throw tooLarge();
         }
-        JsonNode root = parse(readBounded(ctx));
-        FiniteNumbers.check(root);
-        return root;
+        return parse(readBounded(ctx));
     }
 
     /** Parses a complete body; 400 for an empty body or anything the parser refuses. */

@@ -62,15 +62,16 @@ final class SpectrumRequestReader {
         boolean hasLogG = node.has("logDegeneracies");
         if (hasG && hasLogG) {
             fields.add("/levels/logDegeneracies", "give 'degeneracies' or 'logDegeneracies', not both");
-            fields.numbers(node.get("degeneracies"), "/levels/degeneracies", config.maxLevels())
-                    .ifPresent(g -> checkWeights(g, false, fields));
+            fields.numbers(node.get("degeneracies"), "/levels/degeneracies", config.maxLevels());
+            checkWeights(node.get("degeneracies"), false, fields);
             return Optional.empty();
         }
         String gName = hasLogG ? "logDegeneracies" : "degeneracies";
         Optional<double[]> weights = hasG || hasLogG
                 ? fields.numbers(node.get(gName), "/levels/" + gName, config.maxLevels())
                 : energies.map(e -> filled(e.length, 1.0));
-        boolean good = weights.isPresent() && checkWeights(weights.get(), hasLogG, fields);
+        // Every number given is checked, even when some other element is not a number.
+        boolean good = checkWeights(node.get(gName), hasLogG, fields) && weights.isPresent();
         JsonNode energyNode = node.get("energies");
         JsonNode weightNode = node.get(gName);
         if (energyNode != null && energyNode.isArray() && weightNode != null && weightNode.isArray()
@@ -102,14 +103,19 @@ final class SpectrumRequestReader {
         return Optional.of(set.withEnergyRelativeError(2 * EnergyUnit.conversionRelativeError()));
     }
 
-    private static boolean checkWeights(double[] w, boolean logarithmic, Fields fields) {
+    /** Checks each numeric element of a (log-)degeneracy array; true when none is out of range. */
+    private static boolean checkWeights(JsonNode array, boolean logarithmic, Fields fields) {
         boolean good = true;
-        for (int i = 0; i < w.length; i++) {
-            if (logarithmic && !(Math.abs(w[i]) <= LevelSet.MAX_ABS_LOG_DEGENERACY)) {
+        for (int i = 0; array != null && array.isArray() && i < array.size(); i++) {
+            if (!array.get(i).isNumber()) {
+                continue;
+            }
+            double w = array.get(i).doubleValue();
+            if (logarithmic && !(Math.abs(w) <= LevelSet.MAX_ABS_LOG_DEGENERACY)) {
                 fields.add("/levels/logDegeneracies/" + i, "must be at most " + LevelSet.MAX_ABS_LOG_DEGENERACY
                         + " in magnitude");
                 good = false;
-            } else if (!logarithmic && !(w[i] > 0)) {
+            } else if (!logarithmic && !(w > 0)) {
                 fields.add("/levels/degeneracies/" + i, "a degeneracy must be positive");
                 good = false;
             }

@@ -70,11 +70,15 @@ class BadRequestApiTest {
 
     static Stream<Arguments> invalid() {
         return Stream.of(
-                Arguments.of("NaN and Infinity tokens, every one named",
-                        request("{\"energies\": [0, NaN, Infinity], \"degeneracies\": [1, -Infinity, 1]}", "\"K\"",
-                                "{\"values\": [NaN]}", ""),
+                Arguments.of("NaN and Infinity tokens, every one named with the other bad fields",
+                        request("{\"energies\": [0, NaN, Infinity], \"degeneracies\": [1, -Infinity, -1]}",
+                                "\"Q\"", "{\"values\": [NaN]}", ", \"particles\": {\"count\": Infinity}"),
                         new String[] {"/levels/energies/1", "/levels/energies/2", "/levels/degeneracies/1",
-                                "/temperatures/values/0"}),
+                                "/levels/degeneracies/2", "/temperatures/values/0", "/particles/count",
+                                "/particles/statistics", "/energyUnit"}),
+                Arguments.of("a NaN where an object belongs", request("NaN", "\"K\"", GOOD_T, ""),
+                        new String[] {"/levels"}),
+                Arguments.of("a top-level NaN", "NaN", new String[] {""}),
                 Arguments.of("1e400 literals", request("{\"energies\": [1e400, -1e400]}", "\"K\"",
                         "{\"start\": 1, \"stop\": 1e400, \"count\": 2}", ""),
                         new String[] {"/levels/energies/0", "/levels/energies/1", "/temperatures/stop"}),
