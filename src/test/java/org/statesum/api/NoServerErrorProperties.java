@@ -44,7 +44,7 @@ class NoServerErrorProperties {
                 VALID.substring(0, from) + fragment + VALID.substring(Math.min(VALID.length(), from + n)));
     }
 
-    @Property(tries = 150)
+    @Property(tries = 60)
     void noBodyGetsAServerError(@ForAll("bodies") String body) {
         Response answer = TestServer.shared().request().contentType("application/json").body(body)
                 .post("/v1/spectrum");
