@@ -158,7 +158,7 @@ final class BodyReader {
      */
     static String clean(String message) {
         String text = message == null ? "" : message.split("\n", 2)[0];
-        for (String cut : new String[] {": enable", "; enable", " (bound as", " at [Source"}) {
+        for (String cut : new String[] {": enable", "; enable", " (bound as", " (start marker at", " at [Source"}) {
             int at = text.indexOf(cut);
             text = at >= 0 ? text.substring(0, at) : text;
         }

@@ -16,7 +16,7 @@ import org.statesum.testing.TestServer;
  * fragment (or garbage) is answered with 200 or a 4xx problem, and the contract filter checks the
  * shape of every answer.
  */
-class NoServerErrorProperties {
+class NoServerErrorPropertiesTest {
 
     private static final String VALID = "{\"levels\": {\"energies\": [0, 1.5, 3], \"degeneracies\": [1, 2, 1]}, "
             + "\"energyUnit\": \"eV\", \"temperatures\": {\"start\": 0, \"stop\": 500, \"count\": 3}, "
