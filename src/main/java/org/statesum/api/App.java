@@ -29,6 +29,10 @@ public final class App {
         byte[] openApi = resource(OPENAPI_RESOURCE);
         byte[] live = "{\"status\":\"up\"}".getBytes(java.nio.charset.StandardCharsets.UTF_8);
         ProblemMapper problems = new ProblemMapper(mapper);
+        // The Allow header of a 405 on these paths (the compute routes register theirs below).
+        for (String path : new String[] {"/v1/constants", "/openapi.yaml", "/health/live", "/health/ready"}) {
+            problems.allow("GET", path);
+        }
         return Javalin.create(javalin -> {
             javalin.startup.showJavalinBanner = false;
             javalin.startup.showOldJavalinVersionWarning = false;
@@ -36,7 +40,7 @@ public final class App {
             javalin.http.maxRequestSize = config.maxBodyBytes();
             javalin.http.prefer405over404 = true;
             problems.register(javalin);
-            compute.all().forEach((path, endpoint) -> javalin.routes.post(path,
+            compute.all().forEach((path, endpoint) -> javalin.routes.post(problems.allow("POST", path),
                     ctx -> Responses.json(ctx, mapper, FiniteNumbers.answer(bodies.read(ctx), endpoint))));
             javalin.routes.get("/v1/constants", constants::get);
             javalin.routes.get("/openapi.yaml", ctx -> ctx.contentType("application/yaml").result(openApi));

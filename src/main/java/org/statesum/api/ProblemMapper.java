@@ -5,6 +5,10 @@ import io.javalin.config.JavalinConfig;
 import io.javalin.http.Context;
 import io.javalin.http.HttpResponseException;
 import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.concurrent.ConcurrentHashMap;
+import java.util.concurrent.ConcurrentSkipListSet;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 import org.statesum.engine.DomainException;
@@ -23,9 +27,17 @@ final class ProblemMapper {
             + "it has been logged\",\"errors\":[]}").getBytes(java.nio.charset.StandardCharsets.UTF_8);
 
     private final ObjectMapper mapper;
+    /** The methods each path serves, for the Allow header of a 405 (RFC 9110, section 15.5.6). */
+    private final Map<String, Set<String>> allowed = new ConcurrentHashMap<>();
 
     ProblemMapper(ObjectMapper mapper) {
         this.mapper = mapper;
+    }
+
+    /** Records that {@code path} serves {@code method}; returns the path. */
+    String allow(String method, String path) {
+        allowed.computeIfAbsent(path, p -> new ConcurrentSkipListSet<>()).add(method);
+        return path;
     }
 
     void register(JavalinConfig config) {
@@ -50,6 +62,9 @@ final class ProblemMapper {
         });
         for (int status : new int[] {404, 405}) {
             config.routes.error(status, "*", ctx -> {
+                if (status == 405 && allowed.containsKey(ctx.path())) {
+                    ctx.header("Allow", String.join(", ", allowed.get(ctx.path())));
+                }
                 if (!Problem.MEDIA_TYPE.equals(ctx.res().getContentType())) {
                     write(ctx, fromStatus(status));
                 }

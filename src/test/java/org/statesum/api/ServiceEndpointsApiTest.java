@@ -66,9 +66,11 @@ class ServiceEndpointsApiTest {
     @Test
     void aWrongMethodOnAKnownPathIsAProblem405() {
         server.request().get("/v1/spectrum").then().statusCode(405).contentType("application/problem+json")
+                .header("Allow", "POST")
                 .body("type", equalTo("https://statesum.org/problems/method-not-allowed"))
                 .body("status", equalTo(405));
-        server.request().contentType("application/json").body("{}").post("/v1/constants").then().statusCode(405);
+        server.request().contentType("application/json").body("{}").post("/v1/constants").then().statusCode(405)
+                .header("Allow", "GET");
         server.request().delete("/health/live").then().statusCode(405);
     }
 }
