@@ -19,7 +19,9 @@ public final class App {
         ObjectMapper mapper = JsonSupport.mapper(config);
         BodyReader bodies = new BodyReader(mapper, config);
         ComputeRoutes compute = new ComputeRoutes()
-                .add("/v1/spectrum", new SpectrumController(config));
+                .add("/v1/spectrum", new SpectrumController(config))
+                .add("/v1/ideal-gas", new IdealGasController(config))
+                .add("/v1/reaction", new ReactionController(config));
         ConstantsController constants;
         try {
             constants = new ConstantsController(mapper);

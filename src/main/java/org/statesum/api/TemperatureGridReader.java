@@ -34,6 +34,7 @@ final class TemperatureGridReader {
     }
 
     private static Optional<double[]> readValues(JsonNode node, String pointer, int max, Fields fields) {
+        int before = fields.count();
         Optional<double[]> values = fields.numbers(node, pointer, max);
         // Every number given is checked, even when some other element is not a number.
         for (int i = 0; node != null && node.isArray() && node.size() <= max && i < node.size(); i++) {
@@ -41,10 +42,11 @@ final class TemperatureGridReader {
                 checkOne(node.get(i).doubleValue(), pointer + "/" + i, fields);
             }
         }
-        return fields.hasErrors() ? Optional.empty() : values;
+        return fields.count() > before ? Optional.empty() : values;
     }
 
     private static Optional<double[]> readRange(JsonNode node, String pointer, int max, Fields fields) {
+        int before = fields.count();
         OptionalDouble start = fields.number(fields.required(node, "start", pointer), pointer + "/start");
         OptionalDouble stop = fields.number(fields.required(node, "stop", pointer), pointer + "/stop");
         OptionalDouble count = fields.number(fields.required(node, "count", pointer), pointer + "/count");
@@ -63,7 +65,7 @@ final class TemperatureGridReader {
                 && start.getAsDouble() != stop.getAsDouble()) {
             fields.add(pointer + "/count", "a single temperature needs start = stop");
         }
-        if (fields.hasErrors()) {
+        if (fields.count() > before) {
             return Optional.empty();
         }
         int n = (int) count.getAsDouble();
