@@ -61,7 +61,8 @@ final class ThermoResponse {
     /** Every series of a map, by wire name, in the output unit (as in the main answer). */
     static Map<String, Object> seriesMap(Map<Quantity, Series> series, EnergyUnit unit) {
         Map<String, Object> out = new LinkedHashMap<>();
-        series.forEach((quantity, si) -> out.put(wireName(quantity), series(quantity, si, unit)));
+        series.forEach((quantity, si) -> out.put(wireName(quantity),
+                wire(symbol(quantity, unit), series(quantity, si, unit))));
         return out;
     }
 
