@@ -22,6 +22,7 @@ public final class App {
                 .add("/v1/spectrum", new SpectrumController(config))
                 .add("/v1/ideal-gas", new IdealGasController(config))
                 .add("/v1/reaction", new ReactionController(config));
+        SampledController sampled = new SampledController(mapper);
         ConstantsController constants;
         try {
             constants = new ConstantsController(mapper);
@@ -44,6 +45,9 @@ public final class App {
             problems.register(javalin);
             compute.all().forEach((path, endpoint) -> javalin.routes.post(problems.allow("POST", path),
                     ctx -> Responses.json(ctx, mapper, FiniteNumbers.answer(bodies.read(ctx), endpoint))));
+            // Streamed rather than parsed into a tree: its matrices reach 1e7 numbers (see SampledBodyParser).
+            javalin.routes.post(problems.allow("POST", "/v1/sampled"),
+                    ctx -> Responses.json(ctx, mapper, sampled.answer(bodies.open(ctx))));
             javalin.routes.get("/v1/constants", constants::get);
             javalin.routes.get("/openapi.yaml", ctx -> ctx.contentType("application/yaml").result(openApi));
             javalin.routes.get("/health/live", ctx -> ctx.contentType("application/json").result(live));

@@ -12,39 +12,36 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.util.List;
 import java.util.Locale;
+import java.util.regex.Matcher;
 import java.util.regex.Pattern;
+import java.util.zip.GZIPInputStream;
 
 /**
  * Reads a request body into a JSON tree: 415 unless the media type is JSON, 413 beyond the size
  * limit (declared or actually sent), 400 for anything the parser will not accept (syntax, duplicate
  * keys, nesting, string or number limits), with the JSON Pointer of the place where reading stopped.
- * NaN and Infinity tokens are read; {@link FiniteNumbers} answers them with a 422.
+ * NaN and Infinity tokens are read; {@link FiniteNumbers} answers them with a 422. A body sent with
+ * {@code Content-Encoding: gzip} is inflated, and the limit applies to the inflated size.
  */
 final class BodyReader {
 
+    /** Inflater input buffer: large enough to keep the inflater busy on a multi-megabyte body. */
+    private static final int GZIP_BUFFER_BYTES = 1 << 16;
     /** Words that betray the parser's internals; a message containing one is replaced by a plain one. */
     private static final Pattern INTERNAL = Pattern.compile(
             "jackson|feature|java|class|source:|redacted|jsonnode|token \\(of type|`", Pattern.CASE_INSENSITIVE);
+    /** The limit a constraint message names: "... exceeds the maximum allowed (32, from ...)". */
+    private static final Pattern ALLOWED = Pattern.compile("maximum allowed \\((\\d+)");
 
     private final ObjectMapper mapper;
-    private final ServiceConfig config;
+    private final long maxBodyBytes;
 
     BodyReader(ObjectMapper mapper, ServiceConfig config) {
         this.mapper = mapper;
-        this.config = config;
+        this.maxBodyBytes = config.maxBodyBytes();
     }
 
     JsonNode read(Context ctx) {
-        requireJson(ctx.contentType());
-        long declared = ctx.contentLength();
-        if (declared > config.maxBodyBytes()) {
-            // A client that waits for "100 Continue" has sent nothing; one that did not is sending now
-            // and would see a broken pipe instead of the answer, so a modest excess is read and dropped.
-            if (!expectsContinue(ctx) && declared <= config.maxBodyBytes() + drainLimit()) {
-                drain(ctx, declared);
-            }
-            throw tooLarge();
-        }
         return parse(readBounded(ctx));
     }
 
@@ -56,39 +53,83 @@ final class BodyReader {
                 throw ProblemException.unreadable("the request body is empty; send one JSON object", "");
             }
             return root;
-        } catch (StreamConstraintsException e) {
-            throw ProblemException.unreadable("the body exceeds a parser limit: " + limitName(e), pointerOf(e));
-        } catch (JsonParseException e) {
-            throw ProblemException.unreadable("the body is not valid JSON at line " + e.getLocation().getLineNr()
-                    + ", column " + e.getLocation().getColumnNr() + ": " + clean(e.getOriginalMessage()), pointerOf(e));
-        } catch (MismatchedInputException e) {
-            throw ProblemException.unreadable("the body holds more than one JSON value; send exactly one object", "");
-        } catch (JsonProcessingException e) {
-            throw ProblemException.unreadable("the body is not valid JSON: " + clean(e.getOriginalMessage()),
-                    pointerOf(e));
         } catch (IOException e) {
-            throw ProblemException.unreadable("the request body could not be read", "");
+            throw unreadable(e);
         }
+    }
+
+    /**
+     * The body as a stream for endpoints that parse it incrementally: the media type checked, a gzip
+     * body ({@code Content-Encoding: gzip}) inflated on the fly, and at most the size limit read after
+     * decoding (413 beyond, so a small compressed body cannot expand without bound). Any other
+     * content coding is refused with 415 (RFC 9110, section 15.5.16).
+     */
+    InputStream open(Context ctx) {
+        requireJson(ctx.contentType());
+        try {
+            InputStream raw = ctx.req().getInputStream();
+            long declared = ctx.contentLength();
+            if (declared > maxBodyBytes) {
+                // A client that waits for "100 Continue" has sent nothing; one that did not is sending
+                // now and would see a broken pipe instead of the answer, so a modest excess is dropped.
+                if (!expectsContinue(ctx) && declared <= maxBodyBytes + drainLimit()) {
+                    drain(raw, declared);
+                }
+                throw tooLarge();
+            }
+            InputStream in = raw;
+            String coding = ctx.header("Content-Encoding");
+            String name = coding == null ? "identity" : coding.trim().toLowerCase(Locale.ROOT);
+            if (name.equals("gzip") || name.equals("x-gzip")) {
+                in = new GZIPInputStream(raw, GZIP_BUFFER_BYTES);
+            } else if (!name.equals("identity") && !name.isEmpty()) {
+                throw new ProblemException(Problem.of("unsupported-media-type", "Unsupported content coding", 415,
+                        "send the body uncompressed or with Content-Encoding: gzip (got '" + coding + "')",
+                        List.of(new FieldError("", "Content-Encoding must be gzip or absent"))));
+            }
+            return new LimitedInputStream(in, maxBodyBytes, () -> {
+                drain(raw, drainLimit());
+                return tooLarge();
+            });
+        } catch (IOException e) {
+            throw ProblemException.unreadable("the gzip body could not be decoded", "");
+        }
+    }
+
+    /** The 400 problem for a body the parser rejected or that could not be read. */
+    static ProblemException unreadable(IOException failure) {
+        if (failure instanceof StreamConstraintsException e) {
+            return ProblemException.unreadable("the body exceeds a parser limit: " + limitName(e), pointerOf(e));
+        }
+        if (failure instanceof JsonParseException e) {
+            return ProblemException.unreadable("the body is not valid JSON at line " + e.getLocation().getLineNr()
+                    + ", column " + e.getLocation().getColumnNr() + ": " + clean(e.getOriginalMessage()), pointerOf(e));
+        }
+        if (failure instanceof MismatchedInputException) {
+            return ProblemException.unreadable("the body holds more than one JSON value; send exactly one object", "");
+        }
+        if (failure instanceof JsonProcessingException e) {
+            return ProblemException.unreadable("the body is not valid JSON: " + clean(e.getOriginalMessage()),
+                    pointerOf(e));
+        }
+        if (failure instanceof java.util.zip.ZipException) {
+            return ProblemException.unreadable("the gzip body could not be decoded", "");
+        }
+        return ProblemException.unreadable("the body could not be read", "");
     }
 
     /** Reads at most the limit plus one byte, so a body without Content-Length cannot exhaust memory. */
     private byte[] readBounded(Context ctx) {
-        long limit = config.maxBodyBytes();
-        try (InputStream in = ctx.req().getInputStream()) {
-            byte[] body = in.readNBytes((int) Math.min(Integer.MAX_VALUE - 8, limit + 1));
-            if (body.length > limit) {
-                drainStream(in, drainLimit());
-                throw tooLarge();
-            }
-            return body;
+        try (InputStream in = open(ctx)) {
+            return in.readAllBytes();
         } catch (IOException e) {
-            throw ProblemException.unreadable("the request body could not be read", "");
+            throw unreadable(e);
         }
     }
 
     /** How much of an oversized body is read and dropped so that the client gets the 413: the limit again. */
     private long drainLimit() {
-        return config.maxBodyBytes();
+        return maxBodyBytes;
     }
 
     private static boolean expectsContinue(Context ctx) {
@@ -96,16 +137,8 @@ final class BodyReader {
         return expect != null && expect.trim().equalsIgnoreCase("100-continue");
     }
 
-    private static void drain(Context ctx, long bytes) {
-        try (InputStream in = ctx.req().getInputStream()) {
-            drainStream(in, bytes);
-        } catch (IOException e) {
-            // the client went away; the 413 is written if it still can be
-        }
-    }
-
     /** Reads and drops up to {@code bytes} bytes, 8 KiB at a time. */
-    private static void drainStream(InputStream in, long bytes) {
+    private static void drain(InputStream in, long bytes) {
         byte[] sink = new byte[8192];
         long left = bytes;
         try {
@@ -118,10 +151,9 @@ final class BodyReader {
     }
 
     private ProblemException tooLarge() {
-        long limit = config.maxBodyBytes();
         return new ProblemException(Problem.of("body-too-large", "Request body too large", 413,
-                "the request body exceeds the limit of " + limit + " bytes (STATESUM_MAX_BODY_BYTES)",
-                List.of(new FieldError("", "body larger than " + limit + " bytes"))));
+                "the request body exceeds the limit of " + maxBodyBytes + " bytes (STATESUM_MAX_BODY_BYTES)",
+                List.of(new FieldError("", "body larger than " + maxBodyBytes + " bytes"))));
     }
 
     static void requireJson(String contentType) {
@@ -133,22 +165,25 @@ final class BodyReader {
         }
     }
 
-    private String limitName(StreamConstraintsException e) {
-        String message = String.valueOf(e.getOriginalMessage()).toLowerCase(Locale.ROOT);
-        if (message.startsWith("document nesting")) {
-            return "nesting deeper than " + config.maxNestingDepth() + " levels (STATESUM_MAX_NESTING_DEPTH)";
+    /** Which limit was hit, with its configured value as the parser reports it. */
+    private static String limitName(StreamConstraintsException e) {
+        String message = String.valueOf(e.getOriginalMessage());
+        Matcher allowed = ALLOWED.matcher(message);
+        String limit = allowed.find() ? allowed.group(1) : "the configured limit";
+        String lower = message.toLowerCase(Locale.ROOT);
+        if (lower.startsWith("document nesting")) {
+            return "nesting deeper than " + limit + " levels (STATESUM_MAX_NESTING_DEPTH)";
         }
-        if (message.startsWith("name length")) {
-            return "a member name longer than " + config.maxStringLength()
-                    + " characters (STATESUM_MAX_STRING_LENGTH)";
+        if (lower.startsWith("name length")) {
+            return "a member name longer than " + limit + " characters (STATESUM_MAX_STRING_LENGTH)";
         }
-        if (message.startsWith("string value length")) {
-            return "a string longer than " + config.maxStringLength() + " characters (STATESUM_MAX_STRING_LENGTH)";
+        if (lower.startsWith("string value length")) {
+            return "a string longer than " + limit + " characters (STATESUM_MAX_STRING_LENGTH)";
         }
-        if (message.startsWith("number value length")) {
-            return "a number longer than " + JsonSupport.MAX_NUMBER_LENGTH + " characters";
+        if (lower.startsWith("number value length")) {
+            return "a number longer than " + limit + " characters";
         }
-        return "a body longer than " + config.maxBodyBytes() + " bytes (STATESUM_MAX_BODY_BYTES)";
+        return "a body longer than " + limit + " bytes (STATESUM_MAX_BODY_BYTES)";
     }
 
     /**

@@ -6,35 +6,52 @@ import static org.hamcrest.Matchers.hasItems;
 
 import io.restassured.response.Response;
 import java.io.InputStream;
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.statesum.testing.TestServer;
 
 /**
- * The limits that protect the service, at their defaults: body size (declared or streamed), nesting,
+ * The limits that protect the service: body size (declared or streamed, on a server with a 48 MiB
+ * limit), and at the defaults nesting,
  * string, name and number length, the compute budget and the populations limit. Each answer is a
  * 4xx problem that names the limit, never a 5xx.
  */
 class BodyLimitsApiTest {
 
     private static final long FIFTY_MIB = 50L << 20;
+    /** A deployment that serves level sets only, with a 48 MiB limit (the default, 256 MiB, suits sampled matrices). */
+    private static final ServiceConfig FORTY_EIGHT_MIB = new ServiceConfig(0, 48L << 20, 32, 4096, 2_000_000, 100_000,
+            1_000_000_000L, 1_000_000L);
 
     private final TestServer server = TestServer.shared();
+    private static TestServer limited;
+
+    @BeforeAll
+    static void start() {
+        limited = TestServer.with(FORTY_EIGHT_MIB);
+    }
+
+    @AfterAll
+    static void stop() {
+        limited.stop();
+    }
 
     @Test
     void aFiftyMebibyteBodyWithContentLengthIs413() {
         byte[] body = new byte[(int) FIFTY_MIB];
         java.util.Arrays.fill(body, (byte) ' ');
-        server.request().contentType("application/json").body(body).post("/v1/spectrum")
+        limited.request().contentType("application/json").body(body).post("/v1/spectrum")
                 .then().statusCode(413).contentType("application/problem+json")
                 .body("type", equalTo("https://statesum.org/problems/body-too-large"))
-                .body("detail", containsString(String.valueOf(ServiceConfig.defaults().maxBodyBytes())))
+                .body("detail", containsString(String.valueOf(FORTY_EIGHT_MIB.maxBodyBytes())))
                 .body("detail", containsString("STATESUM_MAX_BODY_BYTES"));
     }
 
     @Test
     void aFiftyMebibyteChunkedBodyIs413WithoutBeingHeldInMemory() {
         // Streamed without Content-Length (chunked); the server stops reading one byte past the limit.
-        server.request().contentType("application/json").body(new Spaces(FIFTY_MIB)).post("/v1/spectrum")
+        limited.request().contentType("application/json").body(new Spaces(FIFTY_MIB)).post("/v1/spectrum")
                 .then().statusCode(413).contentType("application/problem+json")
                 .body("type", equalTo("https://statesum.org/problems/body-too-large"));
     }
