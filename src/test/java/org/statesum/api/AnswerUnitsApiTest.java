@@ -91,15 +91,17 @@ class AnswerUnitsApiTest {
 
     @Test
     void molarUnitsArePerMoleOfParticlesOnEitherBasis() {
+        // Levels 0, 1, 2 kJ/mol: the heat capacity peaks near 60 K, inside the grid, so the answer
+        // also locates the maximum, which must follow the same convention.
         String system = "{\"levels\": {\"energies\": [0, 1, 2]}, \"energyUnit\": \"kJ/mol\", "
-                + "\"temperatures\": {\"values\": [100, 400]}, "
+                + "\"temperatures\": {\"values\": [20, 60, 400]}, "
                 + "\"particles\": {\"count\": 1000, \"statistics\": \"indistinguishable\"}, \"basis\": ";
         JsonNode total = post(system + "\"total\"}");
         JsonNode perParticle = post(system + "\"per-particle\"}");
         JsonNode totalEv = post(system + "\"total\", \"outputUnit\": \"eV\"}");
         JsonNode perParticleEv = post(system + "\"per-particle\", \"outputUnit\": \"eV\"}");
         for (String series : new String[] {"helmholtzEnergy", "internalEnergy", "entropy", "isochoricHeatCapacity"}) {
-            for (int j = 0; j < 2; j++) {
+            for (int j = 0; j < 3; j++) {
                 String path = series + "[" + j + "]";
                 double molar = at(perParticle, series, j);
                 // Two extra roundings (1/N and the product) at most: 4 ulps of headroom.
@@ -109,6 +111,21 @@ class AnswerUnitsApiTest {
                 assertEquals(1000 * at(perParticleEv, series, j), totalEnergy, 1e-12 * Math.abs(totalEnergy), path);
             }
         }
+    }
+
+    @Test
+    void theHeatCapacityMaximumFollowsTheMolarConvention() {
+        String system = "{\"levels\": {\"energies\": [0, 1]}, \"energyUnit\": \"kJ/mol\", "
+                + "\"temperatures\": {\"values\": [20, 50, 100]}, "
+                + "\"particles\": {\"count\": 1000, \"statistics\": \"distinguishable\"}, \"basis\": ";
+        JsonNode total = post(system + "\"total\"}").path("heatCapacityMaximum").path("isochoricHeatCapacity");
+        JsonNode perParticle = post(system + "\"per-particle\"}").path("heatCapacityMaximum")
+                .path("isochoricHeatCapacity");
+        // Two-level (Schottky) maximum: C_V = 0.43923 k_B per particle (as in SpectrumApiTest), so
+        // 0.43923 R = 3.6520 J/(mol K) with R = 8.314462618 J/(mol K) (CODATA 2018).
+        assertEquals(0.43923 * 8.314462618, perParticle.path("value").doubleValue(), 5e-5);
+        assertEquals(perParticle.path("value").doubleValue(), total.path("value").doubleValue(),
+                1e-12 * perParticle.path("value").doubleValue());
     }
 
     private JsonNode post(String body) {
