@@ -17,11 +17,8 @@ public final class App {
 
     public static Javalin create(ServiceConfig config) {
         ObjectMapper mapper = JsonSupport.mapper(config);
-        BodyReader bodies = new BodyReader(mapper, config.maxBodyBytes());
-        ComputeRoutes compute = new ComputeRoutes()
-                .add("/v1/spectrum", new SpectrumController(config))
-                .add("/v1/ideal-gas", new IdealGasController(config))
-                .add("/v1/reaction", new ReactionController(config));
+        BodyReader bodies = new BodyReader(mapper, config);
+        ComputeRoutes compute = routes(config);
         SampledController sampled = new SampledController(mapper);
         compute.add("/v1/sampled", sampled);
         ConstantsController constants;
@@ -33,11 +30,16 @@ public final class App {
         byte[] openApi = resource(OPENAPI_RESOURCE);
         ProblemMapper problems = new ProblemMapper(mapper);
         Operations operations = new Operations(config, mapper, bodies, problems);
+        // The Allow header of a 405 on these paths (the compute routes register theirs below).
+        for (String path : new String[] {"/v1/constants", "/openapi.yaml", "/health/live", "/health/ready"}) {
+            problems.allow("GET", path);
+        }
         return Javalin.create(javalin -> {
             javalin.startup.showJavalinBanner = false;
             javalin.startup.showOldJavalinVersionWarning = false;
             javalin.jetty.port = config.port();
             javalin.http.maxRequestSize = config.maxBodyBytes();
+            javalin.http.prefer405over404 = true;
             problems.register(javalin);
             // /v1/sampled is streamed rather than parsed into a tree: its matrices reach 1e7 numbers (see
             // SampledBodyParser); in a batch, where the job body is a tree already, it reads the tree.
@@ -45,6 +47,20 @@ public final class App {
             javalin.routes.get("/v1/constants", constants::get);
             javalin.routes.get("/openapi.yaml", ctx -> ctx.contentType("application/yaml").result(openApi));
         });
+    }
+
+    private static ComputeRoutes routes(ServiceConfig config) {
+        return new ComputeRoutes()
+                .add("/v1/spectrum", new SpectrumController(config))
+                .add("/v1/ideal-gas", new IdealGasController(config))
+                .add("/v1/reaction", new ReactionController(config))
+                .add("/v1/crystal", new CrystalController(config))
+                .add("/v1/quasi-harmonic", new QuasiHarmonicController(config));
+    }
+
+    /** The compute endpoint served at {@code path} (null if none), for in-process callers such as benchmarks. */
+    public static ComputeEndpoint endpoint(ServiceConfig config, String path) {
+        return routes(config).find(path);
     }
 
     /**

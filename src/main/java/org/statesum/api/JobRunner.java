@@ -30,7 +30,7 @@ final class JobRunner {
      * @param unwanted true once the answer will not be read
      */
     Object run(String path, ComputeEndpoint endpoint, JsonNode body, long notAfterNanos, BooleanSupplier unwanted) {
-        return run(path, () -> endpoint.answer(body), notAfterNanos, unwanted);
+        return run(path, () -> FiniteNumbers.answer(body, endpoint), notAfterNanos, unwanted);
     }
 
     /** As above, for work that reads its own body (a streamed endpoint). */

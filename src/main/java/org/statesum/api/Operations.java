@@ -77,17 +77,18 @@ final class Operations {
         });
         AccessControl access = new AccessControl(ops, metrics);
         javalin.routes.before(access::before);
-        compute.all().forEach((path, endpoint) -> javalin.routes.post(path, streamed.containsKey(path)
+        compute.all().forEach((path, endpoint) -> javalin.routes.post(problems.allow("POST", path),
+                streamed.containsKey(path)
                 ? ctx -> direct(ctx, path, c -> () -> streamed.get(path).answer(c))
                 : ctx -> direct(ctx, path, c -> {
                     JsonNode body = bodies.read(c);
-                    return () -> endpoint.answer(body);
+                    return () -> FiniteNumbers.answer(body, endpoint);
                 })));
         ExecutorService workers = Executors.newFixedThreadPool(ops.maxConcurrentJobs(), daemonThreads());
         BatchController batch = new BatchController(mapper, bodies,
                 new BatchRequestReader(compute, ops.maxBatchJobs()), gate, runner, workers, metrics, ops);
-        javalin.routes.post("/v1/batch", batch::post);
-        javalin.routes.get("/metrics", ctx -> ctx.contentType(METRICS_MEDIA_TYPE).result(metrics.scrape()));
+        javalin.routes.post(problems.allow("POST", "/v1/batch"), batch::post);
+        javalin.routes.get(problems.allow("GET", "/metrics"), ctx -> ctx.contentType(METRICS_MEDIA_TYPE).result(metrics.scrape()));
         javalin.routes.get("/health/live", lifecycle::live);
         javalin.routes.get("/health/ready", lifecycle::ready);
         javalin.events.serverStopping(lifecycle::drain);

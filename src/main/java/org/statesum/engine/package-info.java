@@ -18,5 +18,12 @@
  *
  * <p>Long loops stop cooperatively through {@link org.statesum.engine.Cancellation}: a check between
  * independent units of work, never inside an arithmetic kernel, so a stop never leaves a half-done value.
+ *
+ * <p>Solids: the Debye function by its Bernoulli power series and the exponential series of its complement
+ * (M. Abramowitz, I. A. Stegun, Handbook of Mathematical Functions, 1964, 27.1); compensated summation as
+ * in A. Neumaier, Z. Angew. Math. Mech. 54 (1974) 39; equations of state after F. Birch, Phys. Rev. 71
+ * (1947) 809, P. Vinet et al., J. Phys. C 19 (1986) L467 and F. D. Murnaghan, Proc. Natl. Acad. Sci. 30
+ * (1944) 244; least squares by K. Levenberg, Q. Appl. Math. 2 (1944) 164 and D. W. Marquardt, J. SIAM 11
+ * (1963) 431; roots by R. P. Brent, Algorithms for Minimization without Derivatives (1973).
  */
 package org.statesum.engine;
