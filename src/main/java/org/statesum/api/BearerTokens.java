@@ -3,6 +3,7 @@ package org.statesum.api;
 import java.nio.charset.StandardCharsets;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
+import java.util.Arrays;
 import java.util.Collection;
 import java.util.List;
 import java.util.regex.Pattern;
@@ -58,6 +59,29 @@ public final class BearerTokens {
         } catch (NoSuchAlgorithmException e) {
             throw new IllegalStateException("SHA-256 is required of every Java runtime", e);
         }
+    }
+
+    /** Equal when both hold the same tokens in the same order (settings compare by value). */
+    @Override
+    public boolean equals(Object other) {
+        if (!(other instanceof BearerTokens that) || that.digests.size() != digests.size()) {
+            return false;
+        }
+        for (int i = 0; i < digests.size(); i++) {
+            if (!Arrays.equals(digests.get(i), that.digests.get(i))) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    @Override
+    public int hashCode() {
+        int hash = 1;
+        for (byte[] digest : digests) {
+            hash = 31 * hash + Arrays.hashCode(digest);
+        }
+        return hash;
     }
 
     @Override
