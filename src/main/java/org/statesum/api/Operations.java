@@ -68,7 +68,10 @@ final class Operations {
                 routes.add(handler.getPath());
             }
         });
-        RequestObserver observer = new RequestObserver(metrics, routes, ops.accessLog());
+        AccessLog accessLog = new AccessLog(ops.accessLog());
+        metrics.gauge("statesum.access.log.dropped", "access-log lines dropped because the writer was behind",
+                accessLog::dropped);
+        RequestObserver observer = new RequestObserver(metrics, routes, accessLog);
         javalin.jetty.modifyServletContextHandler(context -> context.addFilter(new FilterHolder(observer), "/*",
                 EnumSet.of(DispatcherType.REQUEST)));
         javalin.routes.exception(OverloadedException.class, (e, ctx) -> {
@@ -92,7 +95,10 @@ final class Operations {
         javalin.routes.get("/health/live", lifecycle::live);
         javalin.routes.get("/health/ready", lifecycle::ready);
         javalin.events.serverStopping(lifecycle::drain);
-        javalin.events.serverStopped(workers::shutdownNow);
+        javalin.events.serverStopped(() -> {
+            workers.shutdownNow();
+            accessLog.close();
+        });
     }
 
     /**

@@ -14,31 +14,28 @@ import java.util.Set;
 import java.util.concurrent.ThreadLocalRandom;
 import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.regex.Pattern;
-import org.slf4j.Logger;
-import org.slf4j.LoggerFactory;
 
 /**
  * Wraps every request, whatever its route or outcome: gives it a request id (an incoming
  * {@code X-Request-Id} of 1 to 128 characters of {@code A-Za-z0-9._:-}, else 32 random hex digits),
  * echoes the id, sets the security headers, counts it in flight, and afterwards records its latency by
- * route, method and status and writes one access-log line (logger {@code statesum.access}).
+ * route, method and status and writes one access-log line ({@link AccessLog}).
  */
 final class RequestObserver implements Filter {
 
     static final String REQUEST_ID = "X-Request-Id";
-    private static final Logger ACCESS = LoggerFactory.getLogger("statesum.access");
     private static final char[] HEX = "0123456789abcdef".toCharArray();
     private static final Pattern SAFE_ID = Pattern.compile("[A-Za-z0-9._:-]{1,128}");
 
     private final ServiceMetrics metrics;
     private final Set<String> routes;
-    private final boolean accessLog;
+    private final AccessLog accessLog;
 
     /**
      * @param routes the registered paths (a live view): any other path is logged and measured as
      *        {@code unmatched}
      */
-    RequestObserver(ServiceMetrics metrics, Set<String> routes, boolean accessLog) {
+    RequestObserver(ServiceMetrics metrics, Set<String> routes, AccessLog accessLog) {
         this.metrics = metrics;
         this.routes = routes;
         this.accessLog = accessLog;
@@ -77,10 +74,11 @@ final class RequestObserver implements Filter {
         String route = routes.contains(path) ? path : "unmatched";
         int status = res.getStatus();
         metrics.request(req.getMethod(), route, status, nanos);
-        if (accessLog) {
-            ACCESS.info("id={} method={} path={} status={} ms={} bytesIn={} client={}", id, req.getMethod(),
-                    path.length() > 200 ? path.substring(0, 200) + "..." : path, status,
-                    nanos / 1_000 / 1e3, Math.max(0, req.getContentLengthLong()), req.getRemoteAddr());
+        if (accessLog.enabled()) {
+            accessLog.add("id=" + id + " method=" + req.getMethod() + " path="
+                    + (path.length() > 200 ? path.substring(0, 200) + "..." : path) + " status=" + status
+                    + " ms=" + nanos / 1_000 / 1e3 + " bytesIn=" + Math.max(0, req.getContentLengthLong())
+                    + " client=" + req.getRemoteAddr());
         }
     }
 
