@@ -1,7 +1,7 @@
 package org.statesum.engine;
 
 /**
- * Evaluates one temperature of a prepared level set in three passes over the levels, writing into
+ * Evaluates one temperature of a prepared level set in four passes over the levels, writing into
  * the columns of a {@link CanonicalColumns}. Not thread-safe: one instance per worker (it owns the
  * scratch array of Boltzmann factors).
  *
@@ -16,6 +16,12 @@ package org.statesum.engine;
  * </ol>
  * Then ln Z = ln Z' - beta E_0, U = E_0 + dU, S / k_B = ln Z' + beta dU (E_0 cancels exactly),
  * F = E_0 - T ln Z'.
+ *
+ * <p>The loops are laid out for speed, not in the order of the steps above: the maximum without its
+ * index; the exponentials alone (a loop with nothing but beta and a live across the call to exp runs
+ * as fast as bare exponentials); r and sum t_i dE_i; then everything that needs dU. Every sum still
+ * runs in index order, so the results are the same bits as a single loop per step would give, and
+ * the same on every run.
  *
  * <p>Error bounds are a first-order running error analysis (Higham, Accuracy and Stability of
  * Numerical Algorithms, 2nd ed., 2002, ch. 3-4) doubled to cover second-order terms. Each t_i carries a
@@ -50,43 +56,68 @@ final class CanonicalKernel {
         final double[] errB = levels.logDegeneracyErrorTerms;
         final double beta = 1.0 / temperature;
 
+        // Pass 1: a = max_i y_i. A bare max reduction (no index, no branch) compiles to a tight loop;
+        // the index m of the first maximum is found in pass 2, where y_m - a = 0 exactly.
         double a = Double.NEGATIVE_INFINITY;
-        int m = 0;
         for (int i = 0; i < n; i++) {
-            double y = lg[i] - dE[i] * beta;
-            if (y > a) {
-                a = y;
-                m = i;
-            }
+            a = Math.max(a, lg[i] - dE[i] * beta);
         }
 
+        // Pass 2: t_i = exp(y_i - a), stored. The loop holds nothing live across the call to exp but
+        // beta and a, so it runs as fast as a bare loop of exponentials. x - y = 0 only when x = y in
+        // IEEE arithmetic, so the first zero exponent marks the first maximum, the m of the analysis.
+        int m = 0;
+        for (; m < n; m++) {
+            double d = lg[m] - dE[m] * beta - a;
+            factors[m] = Math.exp(d);
+            if (d == 0) {
+                break;
+            }
+        }
+        // Not found only if some y_i is NaN, which the level set's range checks exclude; NaN then flows.
+        m = m < n ? m : 0;
+        // y_m itself (Math.max may have returned +0 for a -0 maximum; the exponents are unaffected).
+        a = lg[m] - dE[m] * beta;
+        for (int i = m + 1; i < n; i++) {
+            factors[i] = Math.exp(lg[i] - dE[i] * beta - a);
+        }
+
+        // Pass 3: r = sum_{i != m} t_i and sum t_i dE_i, each summed in index order as before.
         double r = 0;
         double sumE = 0;
-        double sumA = 0;
-        double sumB = 0;
-        for (int i = 0; i < n; i++) {
-            double t = Math.exp(lg[i] - dE[i] * beta - a);
-            factors[i] = t;
-            r += i == m ? 0 : t;
+        for (int i = 0; i < m; i++) {
+            double t = factors[i];
+            r += t;
             sumE += t * dE[i];
-            sumA += t * errA[i];
-            sumB += t * errB[i];
+        }
+        sumE += factors[m] * dE[m];
+        for (int i = m + 1; i < n; i++) {
+            double t = factors[i];
+            r += t;
+            sumE += t * dE[i];
         }
         double s = 1 + r;
         double meanShifted = sumE / s;
 
+        // Pass 4: the variance about the mean and the weights of the error analysis, in index order.
+        double sumA = 0;
+        double sumB = 0;
         double variance = 0;
         double w0 = 0;
         double w1 = 0;
         double w2 = 0;
         for (int i = 0; i < n; i++) {
             double t = factors[i];
+            sumA += t * errA[i];
+            sumB += t * errB[i];
             double q = (dE[i] - meanShifted) * beta;
             double aq = Math.abs(q);
             double e = errA[i] * beta + errB[i];
-            double tq2 = t * q * q;
+            double tq = t * q;
+            double tq2 = tq * q;
             variance += tq2;
-            w0 += t * aq;
+            // t |q| = |t q| exactly, as t >= 0 and rounding is symmetric in sign: one product saved.
+            w0 += Math.abs(tq);
             w1 += t * e * aq;
             w2 += e * tq2;
         }

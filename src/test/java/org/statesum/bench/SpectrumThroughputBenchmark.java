@@ -79,12 +79,14 @@ public class SpectrumThroughputBenchmark {
     @Benchmark
     @OperationsPerInvocation(PAIRS)
     public double bareExp() {
+        final double[] e = energiesKelvin;
+        final double[] lg = logDegeneracies;
         double total = 0;
         for (double t : temperaturesKelvin) {
             double beta = 1.0 / t;
             double sum = 0;
             for (int i = 0; i < LEVELS; i++) {
-                sum += Math.exp(logDegeneracies[i] - energiesKelvin[i] * beta);
+                sum += Math.exp(lg[i] - e[i] * beta);
             }
             total += sum;
         }
