@@ -1,40 +1,38 @@
 package org.statesum.engine;
 
 /**
- * Evaluates one temperature of a prepared level set in four passes over the levels, writing into
+ * Evaluates one temperature of a prepared level set in three passes over the levels, writing into
  * the columns of a {@link CanonicalColumns}. Not thread-safe: one instance per worker (it owns the
  * scratch array of Boltzmann factors).
  *
- * <p>Algorithm, with beta = 1/T, x_i = beta dE_i, y_i = ln g_i - x_i:
+ * <p>Algorithm, with beta = fl(1/T) and L_i = ln g_i:
  * <ol>
- *   <li>a = max_i y_i at index m (log-sum-exp shift; the dominant term, not always the ground level
- *       when degeneracies grow fast);</li>
- *   <li>t_i = exp(y_i - a) <= 1, r = sum_{i != m} t_i, s = 1 + r, mean shifted energy
- *       dU = sum t_i dE_i / s; then ln Z' = a + log1p(r), so that ln(1 + 1e-20) keeps its digits;</li>
- *   <li>the variance about that mean, V = sum t_i (beta (dE_i - dU))^2 / s (two-pass, never
- *       &lt;E^2&gt; - &lt;E&gt;^2), giving C_V / k_B = V.</li>
+ *   <li>the dominant level m = argmax_i (L_i - beta dE_i) (the log-sum-exp shift; not always the
+ *       ground level when degeneracies grow fast);</li>
+ *   <li>every level relative to m, d_i = E_i - E_m, z_i = (L_i - L_m) - beta d_i, t_i = exp(z_i)
+ *       (t_m = 1), R = sum_{i != m} t_i, s = 1 + R, mean mu = sum t_i d_i / s;</li>
+ *   <li>q_i = beta (d_i - mu) and V = sum t_i q_i^2 / s (two-pass, never &lt;E^2&gt; - &lt;E&gt;^2).</li>
  * </ol>
- * Then ln Z = ln Z' - beta E_0, U = E_0 + dU, S / k_B = ln Z' + beta dU (E_0 cancels exactly),
- * F = E_0 - T ln Z'.
+ * Then ln Z = (L_m - E_m / T) + log1p(R), with L_m - E_m / T formed in double-double (Dekker's
+ * two-sum and an fma product) so that ln Z keeps its digits when ln g and E / k_B T are both large
+ * and nearly cancel, and ln(1 + 1e-20) keeps its digits too; F = -T ln Z; U = E_m + mu;
+ * S / k_B = L_m + log1p(R) + beta mu (E_m / T cancels analytically); C_V / k_B = V.
+ * Measuring every level from the dominant one keeps the differences d_i and L_i - L_m exact or
+ * small, so thermally relevant levels lose no digits to a far-away ground level.
  *
- * <p>The loops are laid out for speed, not in the order of the steps above: the maximum without its
- * index; the exponentials alone (a loop with nothing but beta and a live across the call to exp runs
- * as fast as bare exponentials); r and sum t_i dE_i; then everything that needs dU. Every sum still
- * runs in index order, so the results are the same bits as a single loop per step would give, and
- * the same on every run.
- *
- * <p>Error bounds are a first-order running error analysis (Higham, Accuracy and Stability of
- * Numerical Algorithms, 2nd ed., 2002, ch. 3-4) doubled to cover second-order terms. Each t_i carries a
- * relative error of at most e_i + e_g, with e_i = beta A_i + B_i from {@link PreparedLevels} and
- * e_g = e_m + u|a| + 2u (the shift a and one ulp of exp). A recursive sum of n non-negative terms adds
- * at most gamma = (n + 4) u relative. Weight errors that are common to all terms cancel in normalised
- * averages, so the bounds of U and C_V use the spread of e_i weighted by |dE_i - dU| and its square.
+ * <p>Error bounds: a running first-order analysis in the style of Higham (Accuracy and Stability of
+ * Numerical Algorithms, 2nd ed., SIAM 2002, ch. 2-4), all in {@link KernelBounds}. Per term, the
+ * computed z_i differs from the exact exponent (from the exact inputs) by at most
+ * e_i = u (|L_i - L_m| + 3 |beta d_i| + |z_i|) + (input terms of i and m), so t_i = tau_i (1 + eps_i)
+ * with |eps_i| <= phi (e_i + 2 u) (exp is within 1 ulp; phi = expm1(M) / M >= 1 with M the largest
+ * such exponent error covers the non-linearity of exp when the inputs are uncertain). Terms whose
+ * factor is subnormal are bounded absolutely instead: |t_i - tau_i| <= (1 + 2u) exp(z_i + e_i) + 2^-1074.
  */
 final class CanonicalKernel {
 
     private static final double U = PreparedLevels.UNIT_ROUNDOFF;
-    /** Safety factor over the first-order bound, covering products of two first-order terms. */
-    private static final double SECOND_ORDER_FACTOR = 2.0;
+    /** Smallest positive double: the absolute rounding of any result in the subnormal range is below it. */
+    static final double ETA = Double.MIN_VALUE;
 
     private final PreparedLevels levels;
     private final double[] factors;
@@ -51,122 +49,105 @@ final class CanonicalKernel {
         }
         final int n = levels.size;
         final double[] dE = levels.shiftedEnergies;
+        final double[] en = levels.energies;
         final double[] lg = levels.logDegeneracies;
         final double[] errA = levels.energyErrorTerms;
         final double[] errB = levels.logDegeneracyErrorTerms;
         final double beta = 1.0 / temperature;
 
-        // Pass 1: a = max_i y_i. A bare max reduction (no index, no branch) compiles to a tight loop;
-        // the index m of the first maximum is found in pass 2, where y_m - a = 0 exactly.
         double a = Double.NEGATIVE_INFINITY;
-        for (int i = 0; i < n; i++) {
-            a = Math.max(a, lg[i] - dE[i] * beta);
-        }
-
-        // Pass 2: t_i = exp(y_i - a), stored. The loop holds nothing live across the call to exp but
-        // beta and a, so it runs as fast as a bare loop of exponentials. x - y = 0 only when x = y in
-        // IEEE arithmetic, so the first zero exponent marks the first maximum, the m of the analysis.
         int m = 0;
-        for (; m < n; m++) {
-            double d = lg[m] - dE[m] * beta - a;
-            factors[m] = Math.exp(d);
-            if (d == 0) {
-                break;
+        for (int i = 0; i < n; i++) {
+            double y = lg[i] - dE[i] * beta;
+            if (y > a) {
+                a = y;
+                m = i;
             }
         }
-        // Not found only if some y_i is NaN, which the level set's range checks exclude; NaN then flows.
-        m = m < n ? m : 0;
-        // y_m itself (Math.max may have returned +0 for a -0 maximum; the exponents are unaffected).
-        a = lg[m] - dE[m] * beta;
-        for (int i = m + 1; i < n; i++) {
-            factors[i] = Math.exp(lg[i] - dE[i] * beta - a);
-        }
 
-        // Pass 3: r = sum_{i != m} t_i and sum t_i dE_i, each summed in index order as before.
+        final double lgm = lg[m];
+        final double em = en[m];
+        final double errM = errB[m] + beta * errA[m];
+        KernelBounds b = new KernelBounds(n, errM, errA[m]);
         double r = 0;
-        double sumE = 0;
-        for (int i = 0; i < m; i++) {
-            double t = factors[i];
-            r += t;
-            sumE += t * dE[i];
-        }
-        sumE += factors[m] * dE[m];
-        for (int i = m + 1; i < n; i++) {
-            double t = factors[i];
-            r += t;
-            sumE += t * dE[i];
+        double sumD = 0;
+        for (int i = 0; i < n; i++) {
+            double d = en[i] - em;
+            double v = d * beta;
+            double z = (lg[i] - lgm) - v;
+            double t = Math.exp(z);
+            factors[i] = t;
+            r += i == m ? 0 : t;
+            sumD += t * d;
+            // Exponent error of term i relative to the dominant one (exactly 0 for i = m: z_m = 0, t_m = 1).
+            double e = i == m ? 0
+                    : U * (Math.abs(lg[i] - lgm) + 3 * Math.abs(v) + Math.abs(z)) + errB[i] + beta * errA[i] + errM;
+            b.term(t, z, e, v, d, errA[i]);
         }
         double s = 1 + r;
-        double meanShifted = sumE / s;
+        double mean = sumD / s;
 
-        // Pass 4: the variance about the mean and the weights of the error analysis, in index order.
-        double sumA = 0;
-        double sumB = 0;
         double variance = 0;
         double w0 = 0;
         double w1 = 0;
         double w2 = 0;
+        double w3 = 0;
+        final double errAm = errA[m];
         for (int i = 0; i < n; i++) {
             double t = factors[i];
-            sumA += t * errA[i];
-            sumB += t * errB[i];
-            double q = (dE[i] - meanShifted) * beta;
+            double d = en[i] - em;
+            double dv = d * beta;
+            double q = (d - mean) * beta;
             double aq = Math.abs(q);
-            double e = errA[i] * beta + errB[i];
-            double tq = t * q;
-            double tq2 = tq * q;
-            variance += tq2;
-            // t |q| = |t q| exactly, as t >= 0 and rounding is symmetric in sign: one product saved.
-            w0 += Math.abs(tq);
+            double q2 = q * q;
+            double dl = lg[i] - lgm;
+            double e = i == m ? 0 : U * (Math.abs(dl) + 3 * Math.abs(dv) + Math.abs(dl - dv)) + errB[i]
+                    + beta * errA[i] + errM;
+            // Error of q_i from the error of d_i (rounding and input); it changes q_i^2 by (2|q| + dq) dq.
+            double dq = i == m ? 0 : U * Math.abs(dv) + beta * (errA[i] + errAm);
+            variance += t * q2;
+            w0 += t * aq;
             w1 += t * e * aq;
-            w2 += e * tq2;
+            w2 += t * e * q2;
+            w3 += t * (2 * aq + dq) * dq;
         }
         variance /= s;
 
-        double gamma = (n + 4) * U;
-        double epsMean = (beta * sumA + sumB) / s;
-        double epsM = beta * errA[m] + errB[m];
-        double epsShared = epsM + U * Math.abs(a) + 2 * U;
+        double log1pR = Math.log1p(r);
+        // L_m - E_m / T in double-double: p + pe = E_m * beta exactly (fma), E_m * betaLow the part of
+        // E_m / T that beta = fl(1/T) misses (1 - T beta is exact by fma), h + he = L_m - p exactly.
+        double p = em * beta;
+        double pe = Math.fma(em, beta, -p);
+        double betaLow = Math.fma(-temperature, beta, 1.0) * beta;
+        double h = lgm - p;
+        double hv = h - lgm;
+        double he = (lgm - (h - hv)) + (-p - hv);
+        double tail = ((he - pe) - em * betaLow) + log1pR;
+        double lnZ = h + tail;
+        double reducedMean = beta * mean;
+        double entropy = (lgm + log1pR) + reducedMean;
+        double uInt = em + mean;
+        double f = -(temperature * lnZ);
+        double logRelative = (lgm - levels.shiftedEnergies[m] * beta) + log1pR;
 
-        double logRelative = a + Math.log1p(r);
-        double logRelativeBound = SECOND_ORDER_FACTOR * (epsM + epsMean + (epsShared + gamma) * (r / s)
-                + 2 * U * Math.abs(logRelative) + U * Math.abs(a));
-
-        // beta * dU and its bound, in units of k_B T.
-        double reducedMean = beta * meanShifted;
-        double reducedMeanBound = SECOND_ORDER_FACTOR * ((w1 + epsMean * w0) / s + beta * sumA / s
-                + (2 * gamma + 2 * U) * reducedMean);
-        double meanShiftedBound = reducedMeanBound * temperature;
-
-        double e0 = levels.groundEnergy;
-        double e0Bound = levels.groundEnergyError;
-
-        double lnZ = logRelative - beta * e0;
-        double lnZBound = logRelativeBound + beta * e0Bound + 2 * U * Math.abs(beta * e0) + U * Math.abs(lnZ);
-
-        double f = e0 - temperature * logRelative;
-        double fBound = e0Bound + temperature * logRelativeBound
-                + 2 * U * (Math.abs(e0) + Math.abs(temperature * logRelative)) + U * Math.abs(f);
-
-        double uInt = e0 + meanShifted;
-        double uBound = e0Bound + meanShiftedBound + U * Math.abs(uInt);
-
-        double entropy = logRelative + reducedMean;
-        double entropyBound = logRelativeBound + reducedMeanBound + 2 * U * Math.abs(entropy);
-
-        double cvBound = SECOND_ORDER_FACTOR * ((w2 / s + epsMean * variance) + 2 * w1 / s
-                + 2 * reducedMeanBound * w0 / s + (gamma + 8 * U) * variance);
-
-        out.set(column, lnZ, lnZBound, f, fBound, uInt, uBound, entropy, entropyBound, variance, cvBound,
+        b.finish(s, r, mean, beta, variance, w0, w1, w2, w3, log1pR, lnZ, tail, p, entropy, lgm);
+        double lnZBound = b.lnZ;
+        double fBound = (1 + 2 * U) * temperature * lnZBound + U * Math.abs(f);
+        double uBound = b.reducedMean * temperature * (1 + 2 * U) + b.subnormalMeanKelvin + levels.energyErrorTerms[m]
+                + U * Math.abs(uInt);
+        out.set(column, lnZ, lnZBound, f, fBound, uInt, uBound, entropy, b.entropy, variance, b.heatCapacity,
                 logRelative, factors[levels.topIndex] / s);
 
         if (out.populations != null) {
-            double[] p = out.populations[column];
+            double[] pop = out.populations[column];
             double[] pb = out.populationBounds[column];
             for (int i = 0; i < n; i++) {
-                p[i] = factors[i] / s;
-                double e = errA[i] * beta + errB[i];
-                pb[i] = SECOND_ORDER_FACTOR * p[i] * (e + epsMean + 2 * epsShared + gamma + U);
+                pop[i] = factors[i] / s;
+                double d = en[i] - em;
+                double z = (lg[i] - lgm) - d * beta;
+                double e = i == m ? 0
+                        : U * (Math.abs(lg[i] - lgm) + 3 * Math.abs(d * beta) + Math.abs(z)) + errB[i] + beta * errA[i] + errM;
+                pb[i] = b.population(factors[i], z, e, s);
             }
         }
     }
@@ -191,8 +172,10 @@ final class CanonicalKernel {
             for (int i = 0; i < levels.size; i++) {
                 boolean ground = levels.shiftedEnergies[i] == 0;
                 p[i] = ground ? Math.exp(levels.logDegeneracies[i] - lnG0) : 0;
-                pb[i] = ground ? SECOND_ORDER_FACTOR * p[i] * (lnG0Bound + levels.logDegeneracyErrorTerms[i]
-                        + 2 * U) : 0;
+                // p_i = exp(ln g_i - ln g_0): exponent error lnG0Bound + input error of ln g_i + the
+                // subtraction; exp within 1 ulp.
+                pb[i] = ground ? 1.0625 * p[i] * (lnG0Bound + levels.logDegeneracyErrorTerms[i]
+                        + U * Math.abs(levels.logDegeneracies[i] - lnG0) + 2 * U) + ETA : 0;
             }
         }
     }

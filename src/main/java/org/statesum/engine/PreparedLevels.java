@@ -1,22 +1,25 @@
 package org.statesum.engine;
 
 /**
- * A level set rearranged for repeated evaluation: energies shifted to the lowest level
- * (dE_i = E_i - E_0 >= 0) and, per level, the first-order rounding bounds used by the error analysis.
+ * A level set rearranged for repeated evaluation: the energies as given, the same energies shifted to
+ * the lowest level (dE_i = E_i - E_0 >= 0, used only to pick the dominant level), and per level the
+ * bounds on the input errors used by the error analysis of {@link CanonicalKernel}.
  *
- * <p>With u = 2^-53 the unit roundoff, the exponent y_i = ln g_i - dE_i / T of level i carries an
- * absolute error of at most beta A_i + B_i, where
+ * <p>Input errors, relative to the exact values the caller meant (zero when the inputs are exact):
  * <ul>
- *   <li>A_i = 4 u dE_i + r (|E_i| + |E_0|) (kelvin) covers the subtraction E_i - E_0, the division by T,
- *       the rounding of y_i, and the relative input error r of each energy;</li>
- *   <li>B_i = u |ln g_i| (+ 2 u |ln g_i| when ln g_i came from Math.log, accurate to one ulp).</li>
+ *   <li>{@code energyErrorTerms[i]} = rho |E_i| (kelvin), rho being the declared relative error of
+ *       the energies ({@link LevelSet#withEnergyRelativeError}, e.g. from a unit conversion);</li>
+ *   <li>{@code logDegeneracyErrorTerms[i]} = 2 u |ln g_i| when ln g_i was formed here by Math.log
+ *       (specified to within 1 ulp, and ulp(x) <= 2 u |x|), 0 when ln g_i was given.</li>
  * </ul>
+ * u = 2^-53 is the unit roundoff of binary64.
  */
 final class PreparedLevels {
 
     static final double UNIT_ROUNDOFF = 0x1.0p-53;
 
     final int size;
+    final double[] energies;
     final double[] shiftedEnergies;
     final double[] logDegeneracies;
     final double[] energyErrorTerms;
@@ -45,7 +48,8 @@ final class PreparedLevels {
         groundEnergy = levels.energyKelvin(lowest);
         double relative = levels.energyRelativeError();
         groundEnergyError = relative * Math.abs(groundEnergy);
-        double logErrorFactor = levels.logDegeneraciesExact() ? u : 3 * u;
+        double logErrorFactor = levels.logDegeneraciesExact() ? 0 : 2 * u;
+        energies = new double[size];
         shiftedEnergies = new double[size];
         logDegeneracies = new double[size];
         energyErrorTerms = new double[size];
@@ -53,29 +57,35 @@ final class PreparedLevels {
         double groundMax = Double.NEGATIVE_INFINITY;
         for (int i = 0; i < size; i++) {
             double e = levels.energyKelvin(i);
-            double shifted = e - groundEnergy;
-            shiftedEnergies[i] = shifted;
+            energies[i] = e;
+            shiftedEnergies[i] = e - groundEnergy;
             logDegeneracies[i] = levels.logDegeneracy(i);
-            energyErrorTerms[i] = 4 * u * shifted + relative * (Math.abs(e) + Math.abs(groundEnergy));
+            energyErrorTerms[i] = relative * Math.abs(e);
             logDegeneracyErrorTerms[i] = logErrorFactor * Math.abs(logDegeneracies[i]);
-            if (shifted == 0) {
+            if (e == groundEnergy) {
                 groundMax = Math.max(groundMax, logDegeneracies[i]);
             }
         }
-        // ln sum_{dE_i = 0} g_i by log-sum-exp about the largest ground-level ln g.
+        // ln sum_{E_i = E_0} g_i by log-sum-exp about the largest ground-level ln g. Each term
+        // exp(ln g_i - groundMax) carries the input error of both logarithms, |ln g_i - groundMax| u
+        // from the subtraction and 2 u from exp; the sum of k terms adds k u; ln adds 2 u |result|
+        // and the final addition u |result|.
         double rest = 0;
         double errorWeighted = 0;
         int terms = 0;
+        double groundMaxError = logErrorFactor * Math.abs(groundMax);
         for (int i = 0; i < size; i++) {
-            if (shiftedEnergies[i] == 0) {
-                double w = Math.exp(logDegeneracies[i] - groundMax);
+            if (energies[i] == groundEnergy) {
+                double z = logDegeneracies[i] - groundMax;
+                double w = Math.exp(z);
                 rest += w;
-                errorWeighted += w * (logDegeneracyErrorTerms[i] + logErrorFactor * Math.abs(groundMax));
+                errorWeighted += w * (logDegeneracyErrorTerms[i] + groundMaxError + u * Math.abs(z) + 2 * u);
                 terms++;
             }
         }
-        logGroundDegeneracy = groundMax + Math.log(rest);
-        logGroundDegeneracyError = 2 * (errorWeighted / rest + (terms + 3) * u
-                + 2 * u * Math.abs(logGroundDegeneracy));
+        double lnRest = Math.log(rest);
+        logGroundDegeneracy = groundMax + lnRest;
+        logGroundDegeneracyError = 1.0625 * (errorWeighted / rest + (terms + 1) * u + 2 * u * Math.abs(lnRest)
+                + u * Math.abs(logGroundDegeneracy));
     }
 }
