@@ -1,9 +1,9 @@
 package org.statesum.engine;
 
 /**
- * Evaluates one temperature of a prepared level set in three passes over the levels, writing into
+ * Evaluates one temperature of a prepared level set in four passes over the levels, writing into
  * the columns of a {@link CanonicalColumns}. Not thread-safe: one instance per worker (it owns the
- * scratch array of Boltzmann factors).
+ * scratch arrays of Boltzmann factors and their exponent errors).
  *
  * <p>Algorithm, with beta = fl(1/T) and L_i = ln g_i:
  * <ol>
@@ -19,6 +19,12 @@ package org.statesum.engine;
  * S / k_B = L_m + log1p(R) + beta mu (E_m / T cancels analytically); C_V / k_B = V.
  * Measuring every level from the dominant one keeps the differences d_i and L_i - L_m exact or
  * small, so thermally relevant levels lose no digits to a far-away ground level.
+ *
+ * <p>The loops are laid out for speed rather than in the order of the steps above: the maximum
+ * without its index; the exponentials alone (a call to exp forces every value live across it to
+ * memory, so the loop around it carries as little as possible); then the sums that need only the
+ * factors; then those that need the mean. Every sum still runs in index order, so the results are
+ * the bits a single loop per step gives, and the same on every run.
  *
  * <p>Error bounds: a running first-order analysis in the style of Higham (Accuracy and Stability of
  * Numerical Algorithms, 2nd ed., SIAM 2002, ch. 2-4), all in {@link KernelBounds}. Per term, the
@@ -36,10 +42,13 @@ final class CanonicalKernel {
 
     private final PreparedLevels levels;
     private final double[] factors;
+    /** The exponent error e-hat_i of every factor, from pass 3 (the same bits pass 4 would recompute). */
+    private final double[] exponentErrors;
 
     CanonicalKernel(PreparedLevels levels) {
         this.levels = levels;
         this.factors = new double[levels.size];
+        this.exponentErrors = new double[levels.size];
     }
 
     void evaluate(double temperature, int column, CanonicalColumns out) {
@@ -55,38 +64,63 @@ final class CanonicalKernel {
         final double[] errB = levels.logDegeneracyErrorTerms;
         final double beta = 1.0 / temperature;
 
+        // Pass 1: m = argmax_i (L_i - beta dE_i), the first index on ties. A bare max reduction (no
+        // index, no branch) is a tight loop; the short scan after it finds the first index that
+        // attains the maximum, the same level as a running strict comparison would pick.
         double a = Double.NEGATIVE_INFINITY;
-        int m = 0;
         for (int i = 0; i < n; i++) {
-            double y = lg[i] - dE[i] * beta;
-            if (y > a) {
-                a = y;
-                m = i;
-            }
+            a = Math.max(a, lg[i] - dE[i] * beta);
         }
+        int m = 0;
+        while (m < n && lg[m] - dE[m] * beta != a) {
+            m++;
+        }
+        // Not found only if some exponent is NaN, which the level set's range checks exclude.
+        m = m < n ? m : 0;
 
         final double lgm = lg[m];
         final double em = en[m];
+        // Pass 2: the factors t_i = exp(z_i) alone. With nothing but beta and the dominant level live
+        // across the call to exp, this loop runs as fast as bare exponentials.
+        for (int i = 0; i < n; i++) {
+            factors[i] = Math.exp((lg[i] - lgm) - (en[i] - em) * beta);
+        }
+
+        // Pass 3: R, sum t_i d_i and the per-term sums of the error analysis, in index order (so the
+        // same bits as accumulating them beside exp); e_i is kept for pass 4 and the populations.
         final double errM = errB[m] + beta * errA[m];
         KernelBounds b = new KernelBounds(n, errM, errA[m]);
         double r = 0;
         double sumD = 0;
+        double sumTE = 0;
+        double sumTAbsD = 0;
+        double sumTA = 0;
+        double maxE = 0;
         for (int i = 0; i < n; i++) {
+            double t = factors[i];
             double d = en[i] - em;
             double v = d * beta;
             double z = (lg[i] - lgm) - v;
-            double t = Math.exp(z);
-            factors[i] = t;
             r += i == m ? 0 : t;
             sumD += t * d;
             // Exponent error of term i relative to the dominant one (exactly 0 for i = m: z_m = 0, t_m = 1).
             double e = i == m ? 0
                     : U * (Math.abs(lg[i] - lgm) + 3 * Math.abs(v) + Math.abs(z)) + errB[i] + beta * errA[i] + errM;
-            b.term(t, z, e, v, d, errA[i]);
+            exponentErrors[i] = e;
+            sumTE += t * e;
+            sumTAbsD += t * Math.abs(d);
+            sumTA += t * errA[i];
+            if (t >= Double.MIN_NORMAL) {
+                maxE = Math.max(maxE, e);
+            } else {
+                b.smallTerm(t, z, e, v, d);
+            }
         }
+        b.terms(sumTE, sumTAbsD, sumTA, maxE);
         double s = 1 + r;
         double mean = sumD / s;
 
+        // Pass 4: the moments about the mean and their error weights, in index order.
         double variance = 0;
         double w0 = 0;
         double w1 = 0;
@@ -100,9 +134,7 @@ final class CanonicalKernel {
             double q = (d - mean) * beta;
             double aq = Math.abs(q);
             double q2 = q * q;
-            double dl = lg[i] - lgm;
-            double e = i == m ? 0 : U * (Math.abs(dl) + 3 * Math.abs(dv) + Math.abs(dl - dv)) + errB[i]
-                    + beta * errA[i] + errM;
+            double e = exponentErrors[i];
             // Error of q_i from the error of d_i (rounding and input); it changes q_i^2 by (2|q| + dq) dq.
             double dq = i == m ? 0 : U * Math.abs(dv) + beta * (errA[i] + errAm);
             variance += t * q2;
@@ -143,11 +175,8 @@ final class CanonicalKernel {
             double[] pb = out.populationBounds[column];
             for (int i = 0; i < n; i++) {
                 pop[i] = factors[i] / s;
-                double d = en[i] - em;
-                double z = (lg[i] - lgm) - d * beta;
-                double e = i == m ? 0
-                        : U * (Math.abs(lg[i] - lgm) + 3 * Math.abs(d * beta) + Math.abs(z)) + errB[i] + beta * errA[i] + errM;
-                pb[i] = b.population(factors[i], z, e, s);
+                double z = (lg[i] - lgm) - (en[i] - em) * beta;
+                pb[i] = b.population(factors[i], z, exponentErrors[i], s);
             }
         }
     }
