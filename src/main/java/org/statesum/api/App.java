@@ -19,7 +19,10 @@ public final class App {
         ObjectMapper mapper = JsonSupport.mapper(config);
         BodyReader bodies = new BodyReader(mapper, config.maxBodyBytes());
         ComputeRoutes compute = new ComputeRoutes()
-                .add("/v1/spectrum", new SpectrumController(config));
+                .add("/v1/spectrum", new SpectrumController(config))
+                .add("/v1/ideal-gas", new IdealGasController(config))
+                .add("/v1/reaction", new ReactionController(config));
+        SampledController sampled = new SampledController(mapper);
         ConstantsController constants;
         try {
             constants = new ConstantsController(mapper);
@@ -37,6 +40,8 @@ public final class App {
             problems.register(javalin);
             compute.all().forEach((path, endpoint) -> javalin.routes.post(path,
                     ctx -> Responses.json(ctx, mapper, endpoint.answer(bodies.read(ctx)))));
+            // Streamed rather than parsed into a tree: its matrices reach 1e7 numbers (see SampledBodyParser).
+            javalin.routes.post("/v1/sampled", ctx -> Responses.json(ctx, mapper, sampled.answer(bodies.open(ctx))));
             javalin.routes.get("/v1/constants", constants::get);
             javalin.routes.get("/openapi.yaml", ctx -> ctx.contentType("application/yaml").result(openApi));
             javalin.routes.get("/health/live", ctx -> ctx.contentType("application/json").result(live));

@@ -10,13 +10,18 @@ import io.javalin.http.Context;
 import java.io.IOException;
 import java.io.InputStream;
 import java.util.List;
+import java.util.zip.GZIPInputStream;
 
 /**
  * Reads a request body into a JSON tree: 415 unless the media type is JSON, 413 beyond the size
  * limit, 400 for anything the parser will not accept (syntax, NaN tokens, duplicate keys, nesting or
- * string limits), with the JSON Pointer of the place where reading stopped.
+ * string limits), with the JSON Pointer of the place where reading stopped. A body sent with
+ * {@code Content-Encoding: gzip} is inflated, and the limit applies to the inflated size.
  */
 final class BodyReader {
+
+    /** Inflater input buffer: large enough to keep the inflater busy on a multi-megabyte body. */
+    private static final int GZIP_BUFFER_BYTES = 1 << 16;
 
     private final ObjectMapper mapper;
     private final long maxBodyBytes;
@@ -27,11 +32,6 @@ final class BodyReader {
     }
 
     JsonNode read(Context ctx) {
-        requireJson(ctx.contentType());
-        long declared = ctx.contentLength();
-        if (declared > maxBodyBytes) {
-            throw tooLarge();
-        }
         byte[] body = readBounded(ctx);
         if (body.length == 0) {
             throw ProblemException.unreadable("the request body is empty", "");
@@ -42,29 +42,65 @@ final class BodyReader {
                 throw ProblemException.unreadable("the request body is empty", "");
             }
             return root;
-        } catch (StreamConstraintsException e) {
-            throw ProblemException.unreadable("the body exceeds a parser limit: " + limitName(e), pointerOf(e));
-        } catch (JsonParseException e) {
-            throw ProblemException.unreadable("the body is not valid JSON at line " + e.getLocation().getLineNr()
-                    + ", column " + e.getLocation().getColumnNr() + ": " + clean(e.getOriginalMessage()), pointerOf(e));
-        } catch (JsonProcessingException e) {
-            throw ProblemException.unreadable("the body is not valid JSON: " + clean(e.getOriginalMessage()),
-                    pointerOf(e));
         } catch (IOException e) {
-            throw ProblemException.unreadable("the body could not be read", "");
+            throw unreadable(e);
         }
+    }
+
+    /**
+     * The body as a stream for endpoints that parse it incrementally: the media type checked, a gzip
+     * body ({@code Content-Encoding: gzip}) inflated on the fly, and at most the size limit read after
+     * decoding (413 beyond, so a small compressed body cannot expand without bound). Any other
+     * content coding is refused with 415 (RFC 9110, section 15.5.16).
+     */
+    InputStream open(Context ctx) {
+        requireJson(ctx.contentType());
+        long declared = ctx.contentLength();
+        if (declared > maxBodyBytes) {
+            throw tooLarge();
+        }
+        try {
+            InputStream in = ctx.req().getInputStream();
+            String coding = ctx.header("Content-Encoding");
+            String name = coding == null ? "identity" : coding.trim().toLowerCase(java.util.Locale.ROOT);
+            if (name.equals("gzip") || name.equals("x-gzip")) {
+                in = new GZIPInputStream(in, GZIP_BUFFER_BYTES);
+            } else if (!name.equals("identity") && !name.isEmpty()) {
+                throw new ProblemException(Problem.of("unsupported-media-type", "Unsupported content coding", 415,
+                        "send the body uncompressed or with Content-Encoding: gzip (got '" + coding + "')",
+                        List.of(new FieldError("", "Content-Encoding must be gzip or absent"))));
+            }
+            return new LimitedInputStream(in, maxBodyBytes, this::tooLarge);
+        } catch (IOException e) {
+            throw ProblemException.unreadable("the gzip body could not be decoded", "");
+        }
+    }
+
+    /** The 400 problem for a body the parser rejected or that could not be read. */
+    static ProblemException unreadable(IOException failure) {
+        if (failure instanceof StreamConstraintsException e) {
+            return ProblemException.unreadable("the body exceeds a parser limit: " + limitName(e), pointerOf(e));
+        }
+        if (failure instanceof JsonParseException e) {
+            return ProblemException.unreadable("the body is not valid JSON at line " + e.getLocation().getLineNr()
+                    + ", column " + e.getLocation().getColumnNr() + ": " + clean(e.getOriginalMessage()), pointerOf(e));
+        }
+        if (failure instanceof JsonProcessingException e) {
+            return ProblemException.unreadable("the body is not valid JSON: " + clean(e.getOriginalMessage()),
+                    pointerOf(e));
+        }
+        if (failure instanceof java.util.zip.ZipException) {
+            return ProblemException.unreadable("the gzip body could not be decoded", "");
+        }
+        return ProblemException.unreadable("the body could not be read", "");
     }
 
     /** Reads at most the limit plus one byte, so a body without Content-Length cannot exhaust memory. */
     private byte[] readBounded(Context ctx) {
-        try (InputStream in = ctx.req().getInputStream()) {
-            byte[] body = in.readNBytes((int) Math.min(Integer.MAX_VALUE - 8, maxBodyBytes + 1));
-            if (body.length > maxBodyBytes) {
-                throw tooLarge();
-            }
-            return body;
+        try (InputStream in = open(ctx)) {
+            return in.readAllBytes();
         } catch (IOException e) {
-            throw ProblemException.unreadable("the request body could not be read", "");
+            throw unreadable(e);
         }
     }
 

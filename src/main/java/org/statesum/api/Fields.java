@@ -27,6 +27,11 @@ final class Fields {
         return !errors.isEmpty();
     }
 
+    /** How many problems have been collected so far (to tell whether one part of a request added any). */
+    int count() {
+        return errors.size();
+    }
+
     void throwIfAny() {
         if (!errors.isEmpty()) {
             throw ProblemException.invalid(errors);

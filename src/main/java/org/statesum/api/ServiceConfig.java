@@ -9,7 +9,8 @@ import java.util.Map;
  * protects the service is here, with its default; the README lists them.
  *
  * @param port HTTP port ({@code STATESUM_PORT}, 8080; 0 picks a free port)
- * @param maxBodyBytes largest request body ({@code STATESUM_MAX_BODY_BYTES}, 40 MiB): 413 beyond
+ * @param maxBodyBytes largest request body after any gzip decoding ({@code STATESUM_MAX_BODY_BYTES},
+ *        256 MiB, room for a 10 x 1e6 reduced-potential matrix at full precision): 413 beyond
  * @param maxNestingDepth deepest JSON nesting ({@code STATESUM_MAX_NESTING_DEPTH}, 32)
  * @param maxStringLength longest JSON string ({@code STATESUM_MAX_STRING_LENGTH}, 4096 chars)
  * @param maxLevels most levels in one level set ({@code STATESUM_MAX_LEVELS}, 2 000 000)
@@ -32,7 +33,7 @@ public record ServiceConfig(
 
     /** The defaults, on port 8080. */
     public static ServiceConfig defaults() {
-        return new ServiceConfig(8080, 40L << 20, 32, 4096, 2_000_000, 100_000, 1_000_000_000L, 1_000_000L);
+        return new ServiceConfig(8080, 256L << 20, 32, 4096, 2_000_000, 100_000, 1_000_000_000L, 1_000_000L);
     }
 
     /** A copy listening on another port (0 for any free port, as tests use). */

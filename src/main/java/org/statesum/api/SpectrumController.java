@@ -4,6 +4,7 @@ import com.fasterxml.jackson.databind.JsonNode;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import org.statesum.engine.ParticleStatistics;
+import org.statesum.models.HeatCapacityMaximum;
 import org.statesum.models.LevelSetModel;
 import org.statesum.models.ThermoResult;
 
@@ -26,6 +27,9 @@ final class SpectrumController implements ComputeEndpoint {
         system.put("statistics", job.particles().statistics() == ParticleStatistics.INDISTINGUISHABLE
                 ? "indistinguishable" : "distinguishable");
         system.put("basis", job.particles().perParticle() ? "per-particle" : "total");
-        return ThermoResponse.of(result, job.outputUnit(), system);
+        Map<String, Object> answer = ThermoResponse.of(result, job.outputUnit(), system);
+        HeatCapacityMaximum.locate(job.levels(), job.particles(), result).ifPresent(max ->
+                answer.put("heatCapacityMaximum", HeatCapacityMaximumAnswer.of(max, job.outputUnit())));
+        return answer;
     }
 }

@@ -34,16 +34,18 @@ final class TemperatureGridReader {
     }
 
     private static Optional<double[]> readValues(JsonNode node, String pointer, int max, Fields fields) {
+        int before = fields.count();
         Optional<double[]> values = fields.numbers(node, pointer, max);
         values.ifPresent(v -> {
             for (int i = 0; i < v.length; i++) {
                 checkOne(v[i], pointer + "/" + i, fields);
             }
         });
-        return fields.hasErrors() ? Optional.empty() : values;
+        return fields.count() > before ? Optional.empty() : values;
     }
 
     private static Optional<double[]> readRange(JsonNode node, String pointer, int max, Fields fields) {
+        int before = fields.count();
         OptionalDouble start = fields.number(fields.required(node, "start", pointer), pointer + "/start");
         OptionalDouble stop = fields.number(fields.required(node, "stop", pointer), pointer + "/stop");
         OptionalDouble count = fields.number(fields.required(node, "count", pointer), pointer + "/count");
@@ -62,7 +64,7 @@ final class TemperatureGridReader {
                 && start.getAsDouble() != stop.getAsDouble()) {
             fields.add(pointer + "/count", "a single temperature needs start = stop");
         }
-        if (fields.hasErrors()) {
+        if (fields.count() > before) {
             return Optional.empty();
         }
         int n = (int) count.getAsDouble();

@@ -42,6 +42,13 @@ final class ThermoResponse {
         return body;
     }
 
+    /** Every series of a map, by wire name, in the output unit (as in the main answer). */
+    static Map<String, Object> seriesMap(Map<Quantity, Series> series, EnergyUnit unit) {
+        Map<String, Object> out = new LinkedHashMap<>();
+        series.forEach((quantity, si) -> out.put(wireName(quantity), series(quantity, si, unit)));
+        return out;
+    }
+
     static Map<String, Object> provenance() {
         Map<String, Object> provenance = new LinkedHashMap<>();
         provenance.put("service", "statesum");
@@ -61,6 +68,7 @@ final class ThermoResponse {
             case GIBBS_ENERGY -> "gibbsEnergy";
             case ISOBARIC_HEAT_CAPACITY -> "isobaricHeatCapacity";
             case ZERO_POINT_ENERGY -> "zeroPointEnergy";
+            case LOG_EQUILIBRIUM_CONSTANT -> "logEquilibriumConstant";
         };
     }
 

@@ -10,7 +10,9 @@ public enum Quantity {
     ENTHALPY(Dimension.ENERGY),
     GIBBS_ENERGY(Dimension.ENERGY),
     ISOBARIC_HEAT_CAPACITY(Dimension.ENTROPY),
-    ZERO_POINT_ENERGY(Dimension.ENERGY);
+    ZERO_POINT_ENERGY(Dimension.ENERGY),
+    /** ln K of a reaction, dimensionless. */
+    LOG_EQUILIBRIUM_CONSTANT(Dimension.NONE);
 
     /** Dimensionless, energy (J per entity inside models) or entropy and heat capacity (J/K per entity). */
     public enum Dimension { NONE, ENERGY, ENTROPY }

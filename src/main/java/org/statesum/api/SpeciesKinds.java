@@ -1,0 +1,43 @@
+package org.statesum.api;
+
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import org.statesum.models.reaction.IdealGasThermo;
+import org.statesum.models.reaction.LevelSetThermo;
+
+/**
+ * The model kinds a reaction species may name in {@code "model"}, each reading the body of its own
+ * endpoint. Adding a kind is one {@link #register} call here.
+ */
+final class SpeciesKinds {
+
+    private final Map<String, SpeciesKind> kinds = new LinkedHashMap<>();
+
+    /** The kinds served today. */
+    static SpeciesKinds standard(ServiceConfig config) {
+        SpectrumRequestReader spectrum = new SpectrumRequestReader(config);
+        IdealGasRequestReader gas = new IdealGasRequestReader(config);
+        return new SpeciesKinds()
+                .register("ideal-gas", input -> new IdealGasThermo(gas.read(input).species()))
+                .register("spectrum", input -> {
+                    SpectrumJob job = spectrum.read(input);
+                    return new LevelSetThermo(job.levels(), job.particles());
+                });
+    }
+
+    SpeciesKinds register(String name, SpeciesKind kind) {
+        kinds.put(name, kind);
+        return this;
+    }
+
+    Optional<SpeciesKind> find(String name) {
+        return Optional.ofNullable(kinds.get(name));
+    }
+
+    List<String> names() {
+        return List.copyOf(Collections.unmodifiableMap(kinds).keySet());
+    }
+}
