@@ -5,7 +5,9 @@
 #
 # The machine is shared, so its load drifts over a minute. The two benchmarks are therefore run in
 # ROUNDS short rounds (default 5), each round measuring both back to back; the ratio is taken per
-# round and the median over rounds is reported.
+# round and the median over rounds is reported. A cross-check then times the same two computations
+# by thread CPU time, alternating at every call (bench/SpectrumCpuRatio.java), which the load of
+# other processes does not reach.
 #
 #   bench/jmh.sh                  5 rounds of 3 x 2 s per benchmark after 3 x 2 s warm-up
 #   ROUNDS=9 bench/jmh.sh         more rounds
@@ -49,3 +51,6 @@ print("ratio spectrum / bare exp per round: " + " ".join(f"{r:.3f}" for r in rat
 print(f"ratio of the best iterations (least disturbed by other processes): {best['spectrum'] / best['bareExp']:.3f}")
 print(f"median ratio {median:.3f} (target >= 0.5): {'met' if median >= 0.5 else 'MISSED'}")
 PY
+
+echo
+java -XX:ActiveProcessorCount=1 -Xmx1g -cp "$cp" bench/SpectrumCpuRatio.java

@@ -115,7 +115,7 @@ final class CanonicalKernel {
 
         // Pass 4: R, sum t_i d_i and the per-term sums of the error analysis, in index order. Terms
         // with a subnormal or zero factor are counted here and handed to the bounds afterwards, also in
-        // index order, so this loop has no branch that depends on the data.
+        // index order, so that this loop holds no call.
         KernelBounds b = new KernelBounds(n, errM, errAm);
         double r = 0;
         double sumD = 0;
@@ -134,8 +134,10 @@ final class CanonicalKernel {
             sumTAbsD += t * Math.abs(d);
             sumTA += t * errA[i];
             boolean normal = t >= Double.MIN_NORMAL;
-            // e-hat >= 0, so a 0 leaves the maximum over the normal terms unchanged.
-            maxE = Math.max(maxE, normal ? e : 0);
+            // The maximum over the normal terms; both tests are nearly always false, so well predicted.
+            if (normal && e > maxE) {
+                maxE = e;
+            }
             small += normal ? 0 : 1;
         }
         for (int i = 0; small > 0 && i < n; i++) {
