@@ -39,6 +39,9 @@ public final class JsonSupport {
                 .disable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS)
                 .disable(JsonWriteFeature.WRITE_NAN_AS_STRINGS)
                 .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
+                // Correctly rounded like Double.parseDouble (the same doubles), several times faster:
+                // reading 1e5 energies was a quarter of a large spectrum request's time (bench/http.sh).
+                .enable(StreamReadFeature.USE_FAST_DOUBLE_PARSER)
                 .build();
         SimpleModule finiteOnly = new SimpleModule("finite-only");
         finiteOnly.addSerializer(double[].class, new FiniteArraySerializer());
