@@ -18,10 +18,7 @@ public final class App {
     public static Javalin create(ServiceConfig config) {
         ObjectMapper mapper = JsonSupport.mapper(config);
         BodyReader bodies = new BodyReader(mapper, config.maxBodyBytes());
-        ComputeRoutes compute = new ComputeRoutes()
-                .add("/v1/spectrum", new SpectrumController(config))
-                .add("/v1/ideal-gas", new IdealGasController(config))
-                .add("/v1/reaction", new ReactionController(config));
+        ComputeRoutes compute = routes(config);
         SampledController sampled = new SampledController(mapper);
         ConstantsController constants;
         try {
@@ -47,6 +44,20 @@ public final class App {
             javalin.routes.get("/health/live", ctx -> ctx.contentType("application/json").result(live));
             javalin.routes.get("/health/ready", ctx -> ctx.contentType("application/json").result(live));
         });
+    }
+
+    private static ComputeRoutes routes(ServiceConfig config) {
+        return new ComputeRoutes()
+                .add("/v1/spectrum", new SpectrumController(config))
+                .add("/v1/ideal-gas", new IdealGasController(config))
+                .add("/v1/reaction", new ReactionController(config))
+                .add("/v1/crystal", new CrystalController(config))
+                .add("/v1/quasi-harmonic", new QuasiHarmonicController(config));
+    }
+
+    /** The compute endpoint served at {@code path} (null if none), for in-process callers such as benchmarks. */
+    public static ComputeEndpoint endpoint(ServiceConfig config, String path) {
+        return routes(config).find(path);
     }
 
     /** Starts the service from environment variables. */

@@ -5,8 +5,10 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import org.statesum.models.reaction.CrystalThermo;
 import org.statesum.models.reaction.IdealGasThermo;
 import org.statesum.models.reaction.LevelSetThermo;
+import org.statesum.models.reaction.QuasiHarmonicThermo;
 
 /**
  * The model kinds a reaction species may name in {@code "model"}, each reading the body of its own
@@ -20,11 +22,22 @@ final class SpeciesKinds {
     static SpeciesKinds standard(ServiceConfig config) {
         SpectrumRequestReader spectrum = new SpectrumRequestReader(config);
         IdealGasRequestReader gas = new IdealGasRequestReader(config);
+        CrystalRequestReader crystal = new CrystalRequestReader(config);
+        QuasiHarmonicRequestReader quasiHarmonic = new QuasiHarmonicRequestReader(config);
         return new SpeciesKinds()
                 .register("ideal-gas", input -> new IdealGasThermo(gas.read(input).species()))
                 .register("spectrum", input -> {
                     SpectrumJob job = spectrum.read(input);
                     return new LevelSetThermo(job.levels(), job.particles());
+                })
+                .register("crystal", input -> new CrystalThermo(crystal.read(input).crystal()))
+                .register("quasi-harmonic", input -> {
+                    QuasiHarmonicJob job = quasiHarmonic.read(input);
+                    if (job.pressuresPascal().length != 1) {
+                        throw ProblemException.invalid(List.of(new FieldError("/pressures/values",
+                                "a reaction species is taken at one pressure")));
+                    }
+                    return new QuasiHarmonicThermo(job.crystal(), job.pressuresPascal()[0]);
                 });
     }
 

@@ -72,7 +72,7 @@ final class ThermoResponse {
         };
     }
 
-    private static Map<String, Object> series(Quantity quantity, Series si, EnergyUnit unit) {
+    static Map<String, Object> series(Quantity quantity, Series si, EnergyUnit unit) {
         Map<String, Object> out = new LinkedHashMap<>();
         Series converted;
         switch (quantity.dimension()) {

@@ -84,6 +84,9 @@ final class CanonicalKernel {
         // Not found only if some exponent is NaN, which the level set's range checks exclude.
         m = m < n ? m : 0;
 
+        // m maximises the computed y_i, not the exact one; but a level can compete with the maximum only
+        // when |ln g| and beta dE are below about 2e12 (LevelSet caps |ln g| at 1e12), where y carries
+        // at most 3e12 u < 1e-3: so every z_i below is at most 1e-3 and t_i <= 1.001, no overflow.
         final double lgm = lg[m];
         final double em = en[m];
         final double[] factors = this.factors;
@@ -116,13 +119,14 @@ final class CanonicalKernel {
         // Pass 4: R, sum t_i d_i and the per-term sums of the error analysis, in index order. Terms
         // with a subnormal or zero factor are counted here and handed to the bounds afterwards, also in
         // index order, so that this loop holds no call.
-        KernelBounds b = new KernelBounds(n, errM, errAm);
+        KernelBounds b = new KernelBounds(n, errM, errAm, errB[m]);
         double r = 0;
         double sumD = 0;
         double sumTE = 0;
         double sumTAbsD = 0;
         double sumTA = 0;
         double maxE = 0;
+        double maxAll = 0;
         int small = 0;
         for (int i = 0; i < n; i++) {
             double t = factors[i];
@@ -132,9 +136,13 @@ final class CanonicalKernel {
             sumD += t * d;
             sumTE += t * e;
             sumTAbsD += t * Math.abs(d);
-            sumTA += t * errA[i];
+            sumTA += t * (i == m ? 0 : errA[i]);
             boolean normal = t >= Double.MIN_NORMAL;
-            // The maximum over the normal terms; both tests are nearly always false, so well predicted.
+            // The maxima over all terms and over the normal ones; the tests are nearly always false,
+            // so well predicted (e-hat >= 0 and both start at 0, as Math.max from 0 would give).
+            if (e > maxAll) {
+                maxAll = e;
+            }
             if (normal && e > maxE) {
                 maxE = e;
             }
@@ -149,7 +157,7 @@ final class CanonicalKernel {
                 small--;
             }
         }
-        b.terms(sumTE, sumTAbsD, sumTA, maxE);
+        b.terms(sumTE, sumTAbsD, sumTA, maxE, maxAll);
         double s = 1 + r;
         double mean = sumD / s;
 
@@ -196,7 +204,20 @@ final class CanonicalKernel {
         double fBound = (1 + 2 * U) * temperature * lnZBound + U * Math.abs(f);
         double uBound = b.reducedMean * temperature * (1 + 2 * U) + b.subnormalMeanKelvin + levels.energyErrorTerms[m]
                 + U * Math.abs(uInt);
-        out.set(column, lnZ, lnZBound, f, fBound, uInt, uBound, entropy, b.entropy, variance, b.heatCapacity,
+        // Crude but always valid: U within the energy range, S / k_B between min ln g and ln sum g,
+        // C_V / k_B between 0 and (range / 2T)^2 (Popoviciu's inequality), each widened by the input
+        // errors and a few roundings. They take over when the first-order bounds are not finite.
+        double lo = levels.groundEnergy - levels.groundEnergyError;
+        double hi = levels.energies[levels.topIndex] + levels.energyErrorTerms[levels.topIndex];
+        uBound = KernelBounds.honestMin(uBound, (1 + 4 * U) * Math.max(uInt - lo, hi - uInt));
+        double sLo = levels.minLogDegeneracy - levels.maxLogDegeneracyError;
+        double sHi = levels.logTotalDegeneracy + levels.maxLogDegeneracyError
+                + (levels.size + 4) * U * Math.abs(levels.logTotalDegeneracy);
+        double sBound = KernelBounds.honestMin(b.entropy, (1 + 4 * U) * Math.max(entropy - sLo, sHi - entropy));
+        double halfRange = 0.5 * beta * (hi - lo) * (1 + 4 * U);
+        double cvBound = KernelBounds.honestMin(b.heatCapacity,
+                Math.max(variance, halfRange * halfRange * (1 + 4 * U) - variance));
+        out.set(column, lnZ, lnZBound, f, fBound, uInt, uBound, entropy, sBound, variance, cvBound,
                 logRelative, factors[levels.topIndex] / s);
 
         if (out.populations != null) {
@@ -205,7 +226,8 @@ final class CanonicalKernel {
             for (int i = 0; i < n; i++) {
                 pop[i] = factors[i] / s;
                 double z = (lg[i] - lgm) - (en[i] - em) * beta;
-                pb[i] = b.population(factors[i], z, exponentErrors[i], s);
+                pb[i] = KernelBounds.honestMin(b.population(factors[i], z, exponentErrors[i], s),
+                        Math.max(pop[i], 1 - pop[i]));
             }
         }
     }

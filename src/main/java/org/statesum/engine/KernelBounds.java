@@ -49,7 +49,10 @@ final class KernelBounds {
     private double a1Kelvin;
     private double sumTA;
     private long belowUnderflow;
+    private double maxAll;
     private final double errAm;
+    /** Input error of ln g_m alone: S = L_m + ln s + beta mu holds E_m only through the weights. */
+    private final double errBm;
 
     double lnZ;
     double reducedMean;
@@ -60,7 +63,8 @@ final class KernelBounds {
     private double phi;
     private double epsS;
 
-    KernelBounds(int n, double errM, double errAm) {
+    KernelBounds(int n, double errM, double errAm, double errBm) {
+        this.errBm = errBm;
         this.n = n;
         this.errM = errM;
         this.errAm = errAm;
@@ -68,14 +72,16 @@ final class KernelBounds {
 
     /**
      * The sums over all terms, accumulated by the caller in index order: sum t e-hat, sum t |d|,
-     * sum t rho |E_i| (K), and the largest e-hat among the terms with a normal factor (t >= 2^-1022).
+     * sum t rho |E_i| (K, 0 for the dominant level), the largest e-hat among the terms with a normal
+     * factor (t >= 2^-1022) and the largest e-hat of all.
      */
     void terms(double sumTExponentError, double sumTAbsDifference, double sumTInputErrorKelvin,
-            double maxNormalExponentError) {
+            double maxNormalExponentError, double maxExponentError) {
         sumTE = sumTExponentError;
         sumTAbsD = sumTAbsDifference;
         sumTA = sumTInputErrorKelvin;
         maxE = maxNormalExponentError;
+        maxAll = maxExponentError;
     }
 
     /**
@@ -123,6 +129,10 @@ final class KernelBounds {
         epsS = k0 / s;
         double lnSError = epsS < 0.5 ? epsS / (1 - epsS) : Double.POSITIVE_INFINITY;
         double log1pRounding = 2 * U * Math.abs(log1pR);
+        // Not first order: shifting every exponent by at most max e-hat shifts ln sum exp by at most as
+        // much, whatever its size; this caps the bound when the inputs are very uncertain.
+        double lnSCrude = maxAll + 2 * U + 2 * a0 / s + n * U;
+        lnSError = honestMin(lnSError, lnSCrude);
         lnZ = SAFETY * (errM + lnSError + log1pRounding + U * Math.abs(tail) + U * Math.abs(lnZValue)
                 + 6 * U * U * (Math.abs(p) + Math.abs(lgm) + Math.abs(lnZValue)));
 
@@ -136,7 +146,7 @@ final class KernelBounds {
         subnormalMeanKelvin = SAFETY * (a1Kelvin / s + 2 * n * ETA);
 
         entropy = SAFETY * (lnSError + log1pRounding + reducedMean + U * Math.abs(lgm + log1pR)
-                + U * Math.abs(entropyValue)) + errM;
+                + U * Math.abs(entropyValue)) + errBm;
 
         double varSum = variance * s;
         double weightsV = (phi * ((w2 + 2 * U * varSum) + variance * (sumTE + 2 * U * r))
@@ -146,6 +156,11 @@ final class KernelBounds {
         // V is stationary in its centre: a centre off by c adds exactly c^2, and only the rounding of
         // the mean (not the weights, which the centred sums above already cover) moves the centre.
         heatCapacity = SAFETY * (weightsV + valuesV + roundingV + meanRounding * meanRounding);
+    }
+
+    /** The smaller of two valid bounds; NaN (an undefined first-order bound) yields the other. */
+    static double honestMin(double firstOrder, double crude) {
+        return firstOrder <= crude ? firstOrder : crude;
     }
 
     /** Bound on the population t / s of one term (after {@link #finish}). */

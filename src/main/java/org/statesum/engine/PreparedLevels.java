@@ -30,6 +30,10 @@ final class PreparedLevels {
     /** ln of the summed degeneracy of every level at exactly the lowest energy (the T = 0 limit of S/k). */
     final double logGroundDegeneracy;
     final double logGroundDegeneracyError;
+    /** Smallest and log-sum-exp of the ln g_i, and the largest input error of any ln g_i: S / k_B lies between. */
+    final double minLogDegeneracy;
+    final double logTotalDegeneracy;
+    final double maxLogDegeneracyError;
 
     PreparedLevels(LevelSet levels) {
         double u = UNIT_ROUNDOFF;
@@ -84,6 +88,21 @@ final class PreparedLevels {
             }
         }
         double lnRest = Math.log(rest);
+        double minLog = Double.POSITIVE_INFINITY;
+        double maxLog = Double.NEGATIVE_INFINITY;
+        double worst = 0;
+        for (int i = 0; i < size; i++) {
+            minLog = Math.min(minLog, logDegeneracies[i]);
+            maxLog = Math.max(maxLog, logDegeneracies[i]);
+            worst = Math.max(worst, logDegeneracyErrorTerms[i]);
+        }
+        double total = 0;
+        for (int i = 0; i < size; i++) {
+            total += Math.exp(logDegeneracies[i] - maxLog);
+        }
+        minLogDegeneracy = minLog;
+        logTotalDegeneracy = maxLog + Math.log(total);
+        maxLogDegeneracyError = worst;
         logGroundDegeneracy = groundMax + lnRest;
         logGroundDegeneracyError = 1.0625 * (errorWeighted / rest + (terms + 1) * u + 2 * u * Math.abs(lnRest)
                 + u * Math.abs(logGroundDegeneracy));

@@ -21,13 +21,17 @@ public record Series(double[] values, double[] errorBounds) {
         return values.length;
     }
 
-    /** This series times a positive scale; bounds scale too and grow by two roundings (the factor and the product). */
+    /**
+     * This series times a scale; bounds scale too and grow by 3 ulp(v) > 3 u |v|: the product's rounding
+     * and up to two roundings already in the factor (a unit factor and its reciprocal, say, as in
+     * J -> kJ/mol), also covering the rounding of the scaled bound. An exact zero stays an exact zero.
+     */
     public Series scaled(double factor) {
         double[] v = new double[values.length];
         double[] b = new double[values.length];
         for (int i = 0; i < v.length; i++) {
             v[i] = values[i] * factor;
-            b[i] = errorBounds[i] * Math.abs(factor) + 2 * Math.ulp(v[i]);
+            b[i] = errorBounds[i] * Math.abs(factor) + (values[i] == 0 ? 0 : 3 * Math.ulp(v[i]));
         }
         return new Series(v, b);
     }

@@ -54,8 +54,10 @@ public final class LevelSetModel {
         undefinedLogZ(table).ifPresent(warnings::add);
         Map<String, Object> precision = new LinkedHashMap<>();
         precision.put("arithmetic", "IEEE 754 binary64");
-        precision.put("summation", "log-sum-exp about the dominant term; moments about the mean (two-pass)");
-        precision.put("errorAnalysis", "first-order running error bound, doubled");
+        precision.put("summation", "log-sum-exp about the dominant level; moments about the mean (two-pass); "
+                + "ln Z assembled in double-double");
+        precision.put("errorAnalysis", "running error bound per term (input, rounding and underflow errors), "
+                + "capped by always-valid interval bounds");
         precision.put("levels", levels.size());
         precision.put("termsKept", levels.size());
         precision.put("truncationBound", 0.0);

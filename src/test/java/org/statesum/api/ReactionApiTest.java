@@ -117,7 +117,7 @@ class ReactionApiTest {
                 .replace("\"value\": 28.0101", "\"value\": -28")
                 .replace("\"value\": 60.853", "\"value\": -60.853")
                 .replace("\"model\": \"ideal-gas\", \"input\": {\n     \"mass\": {\"value\": 44.0095",
-                        "\"model\": \"crystal\", \"input\": {\n     \"mass\": {\"value\": 44.0095")
+                        "\"model\": \"liquid\", \"input\": {\n     \"mass\": {\"value\": 44.0095")
                 .replace("\"coefficient\": 1, \"model\": \"ideal-gas\", \"input\": {\n     \"mass\": {\"value\": 2.01588",
                         "\"coefficient\": 0, \"model\": \"ideal-gas\", \"input\": {\"temperatures\": {\"values\": [1]},\n     \"mass\": {\"value\": 2.01588");
         server.request().contentType("application/json").body(bad).post("/v1/reaction")

@@ -1,6 +1,8 @@
-package org.statesum.engine;
+package org.statesum.testing;
 
 import java.util.Arrays;
+import org.statesum.engine.CanonicalEnsemble;
+import org.statesum.engine.LevelSet;
 import java.util.SplittableRandom;
 
 /**
@@ -9,12 +11,12 @@ import java.util.SplittableRandom;
  * log-degeneracies up to 1e6 that compete with equally large Boltzmann exponents, and temperatures
  * from 1e-12 K to 1e12 K, far below and far above the level spacing.
  */
-final class RandomLevelSets {
+public final class RandomLevelSets {
 
     /** One generated case: the inputs and the temperature grid (K). */
-    record Case(double[] energiesKelvin, double[] weights, boolean logarithmic, double[] temperatures) {
+    public record Case(double[] energiesKelvin, double[] weights, boolean logarithmic, double[] temperatures) {
 
-        LevelSet levelSet() {
+        public LevelSet levelSet() {
             return logarithmic ? LevelSet.ofLogDegeneracies(energiesKelvin, weights)
                     : LevelSet.ofDegeneracies(energiesKelvin, weights);
         }
@@ -35,7 +37,7 @@ final class RandomLevelSets {
         return Math.pow(10, r.nextDouble(lowExp, highExp));
     }
 
-    static Case next(SplittableRandom r) {
+    public static Case next(SplittableRandom r) {
         int n = 1 + r.nextInt(r.nextInt(4) == 0 ? 60 : 8);
         double[] e = new double[n];
         double width = logUniform(r, -3, 8);

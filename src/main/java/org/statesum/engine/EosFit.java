@@ -1,0 +1,276 @@
+package org.statesum.engine;
+
+import org.apache.commons.math3.linear.Array2DRowRealMatrix;
+import org.apache.commons.math3.linear.ArrayRealVector;
+import org.apache.commons.math3.linear.LUDecomposition;
+import org.apache.commons.math3.linear.RealMatrix;
+import org.apache.commons.math3.linear.RealVector;
+import org.apache.commons.math3.util.Pair;
+
+/**
+ * A least-squares fit of an {@link EquationOfState} to sampled energies E_i at volumes V_i, by
+ * Levenberg-Marquardt (K. Levenberg, Q. Appl. Math. 2 (1944) 164; D. W. Marquardt, 1963) in
+ * normalised units (V / mean V, E scaled to the sampled span), started from a parabola through the data
+ * or from a given start (the previous temperature's answer). Units in and out are the caller's own
+ * (energy, volume, energy / volume), always consistent.
+ *
+ * <p>The fit also keeps the Gauss-Newton sensitivity A = (J^T J)^{-1} J^T of the parameters to the data,
+ * so that {@link EosMinimum} can say how far its answers move when each E_i moves within
+ * max |residual| plus its own error bound. Immutable.
+ */
+public final class EosFit {
+
+    /** Keeps B0' away from 1, where the Vinet and Murnaghan forms are singular, and from runaway values. */
+    static final double MIN_PRESSURE_DERIVATIVE = 1.05;
+    static final double MAX_PRESSURE_DERIVATIVE = 30;
+    private static final int MAX_ITERATIONS = 200;
+    /** Relative parameter step below which the fit has converged (the Jacobian's own error is ~1e-10). */
+    private static final double STEP_TOLERANCE = 1e-12;
+
+    private final EquationOfState eos;
+    private final double volumeScale;
+    private final double energyShift;
+    private final double energyScale;
+    private final double[] normalised;
+    private final double[][] sensitivity;
+    private final double maxResidual;
+    private final double rmsResidual;
+    private final double[] volumes;
+
+    private EosFit(EquationOfState eos, double[] volumes, double volumeScale, double energyShift,
+            double energyScale, double[] normalised, double[][] sensitivity, double maxResidual, double rmsResidual) {
+        this.eos = eos;
+        this.volumes = volumes;
+        this.volumeScale = volumeScale;
+        this.energyShift = energyShift;
+        this.energyScale = energyScale;
+        this.normalised = normalised;
+        this.sensitivity = sensitivity;
+        this.maxResidual = maxResidual;
+        this.rmsResidual = rmsResidual;
+    }
+
+    /**
+     * Fits the equation of state.
+     *
+     * @param volumes at least 5 distinct positive volumes
+     * @param energies the energy at each volume
+     * @param start parameters (E0, V0, B0, B0') in the caller's units to start from, or null
+     * @return the fit, or null when the data have no minimum a fit can start from (concave data) or the
+     *         optimiser does not converge
+     */
+    public static EosFit of(EquationOfState eos, double[] volumes, double[] energies, double[] start) {
+        int n = volumes.length;
+        double vs = 0;
+        double emin = Double.POSITIVE_INFINITY;
+        double emax = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < n; i++) {
+            vs += volumes[i] / n;
+            emin = Math.min(emin, energies[i]);
+            emax = Math.max(emax, energies[i]);
+        }
+        double es = emax > emin ? emax - emin : Math.max(Math.abs(emin), 1.0);
+        double[] v = new double[n];
+        double[] e = new double[n];
+        for (int i = 0; i < n; i++) {
+            v[i] = volumes[i] / vs;
+            e[i] = (energies[i] - emin) / es;
+        }
+        double[] guess = start != null
+                ? new double[] {(start[0] - emin) / es, start[1] / vs, start[2] * vs / es, start[3]}
+                : parabolaStart(v, e);
+        if (guess == null || !(guess[1] > 0 && guess[2] > 0)) {
+            return null;
+        }
+        guess[3] = Math.min(Math.max(guess[3], MIN_PRESSURE_DERIVATIVE), MAX_PRESSURE_DERIVATIVE);
+        double[] p = levenbergMarquardt(eos, v, e, guess);
+        if (p == null || !(p[1] > 0 && p[2] > 0) || !Double.isFinite(p[0])) {
+            return null;
+        }
+        RealMatrix jacobian = model(eos, v, new ArrayRealVector(p, false)).getSecond();
+        RealMatrix normal = jacobian.transpose().multiply(jacobian);
+        LUDecomposition lu = new LUDecomposition(normal, 1e-300);
+        if (!lu.getSolver().isNonSingular()) {
+            return null;
+        }
+        double[][] a = lu.getSolver().getInverse().multiply(jacobian.transpose()).getData();
+        double max = 0;
+        double squares = 0;
+        for (int i = 0; i < n; i++) {
+            double r = eos.energy(v[i], p) - e[i];
+            max = Math.max(max, Math.abs(r));
+            squares += r * r;
+        }
+        return new EosFit(eos, volumes.clone(), vs, emin, es, p, a, max * es, Math.sqrt(squares / n) * es);
+    }
+
+    /** The fitted (E0, V0, B0, B0') in the caller's units. */
+    public double[] parameters() {
+        return new double[] {energyShift + energyScale * normalised[0], volumeScale * normalised[1],
+                normalised[2] * energyScale / volumeScale, normalised[3]};
+    }
+
+    public EquationOfState equationOfState() {
+        return eos;
+    }
+
+    /** max_i |E_fit(V_i) - E_i|, caller's energy unit. */
+    public double maxAbsoluteResidual() {
+        return maxResidual;
+    }
+
+    /** sqrt(mean of squared residuals), caller's energy unit. */
+    public double rootMeanSquareResidual() {
+        return rmsResidual;
+    }
+
+    double[] volumes() {
+        return volumes;
+    }
+
+    double volumeScale() {
+        return volumeScale;
+    }
+
+    double energyShift() {
+        return energyShift;
+    }
+
+    double energyScale() {
+        return energyScale;
+    }
+
+    double[] normalisedParameters() {
+        return normalised.clone();
+    }
+
+    double[][] sensitivity() {
+        return sensitivity;
+    }
+
+    /**
+     * Levenberg-Marquardt with Marquardt's diagonal scaling (D. W. Marquardt, J. SIAM 11 (1963) 431): solve
+     * (J^T J + lambda diag(J^T J)) d = -J^T r, accept d if the cost falls (lambda / 10), else lambda x 10.
+     * Stops when a step changes no parameter by more than {@link #STEP_TOLERANCE} relative (or by 1e-8 while
+     * lowering the cost by under 1e-14 of itself), or when no damping up to 1e12 lowers the cost any more (a
+     * minimum to working precision); after {@link #MAX_ITERATIONS} it returns the best point found.
+     */
+    private static double[] levenbergMarquardt(EquationOfState eos, double[] v, double[] e, double[] start) {
+        double[] p = keepInRange(new ArrayRealVector(start, false)).toArray();
+        double cost = cost(eos, v, e, p);
+        double lambda = 1e-3;
+        for (int iteration = 0; iteration < MAX_ITERATIONS; iteration++) {
+            Pair<RealVector, RealMatrix> m = model(eos, v, new ArrayRealVector(p, false));
+            double[][] j = m.getSecond().getData();
+            double[] r = m.getFirst().toArray();
+            double[][] a = new double[4][4];
+            double[] g = new double[4];
+            for (int i = 0; i < v.length; i++) {
+                double ri = r[i] - e[i];
+                for (int k = 0; k < 4; k++) {
+                    g[k] -= j[i][k] * ri;
+                    for (int l = 0; l < 4; l++) {
+                        a[k][l] += j[i][k] * j[i][l];
+                    }
+                }
+            }
+            while (true) {
+                double[][] damped = new double[4][];
+                for (int k = 0; k < 4; k++) {
+                    damped[k] = a[k].clone();
+                    damped[k][k] += lambda * a[k][k];
+                }
+                LUDecomposition lu = new LUDecomposition(new Array2DRowRealMatrix(damped, false), 1e-300);
+                if (!lu.getSolver().isNonSingular()) {
+                    return null;
+                }
+                double[] step = lu.getSolver().solve(new ArrayRealVector(g, false)).toArray();
+                double[] trial = p.clone();
+                for (int k = 0; k < 4; k++) {
+                    trial[k] += step[k];
+                }
+                trial = keepInRange(new ArrayRealVector(trial, false)).toArray();
+                double trialCost = cost(eos, v, e, trial);
+                if (trialCost < cost) {
+                    double largest = 0;
+                    for (int k = 0; k < 4; k++) {
+                        largest = Math.max(largest, Math.abs(trial[k] - p[k]) / Math.max(Math.abs(p[k]), 1e-3));
+                    }
+                    // Converged: a negligible step, or a small one that no longer lowers the cost measurably.
+                    boolean small = largest <= STEP_TOLERANCE
+                            || (largest <= 1e-8 && cost - trialCost <= 1e-14 * cost);
+                    p = trial;
+                    cost = trialCost;
+                    lambda = Math.max(lambda / 10, 1e-12);
+                    if (small) {
+                        return p;
+                    }
+                    break;
+                }
+                lambda *= 10;
+                if (lambda > 1e12) {
+                    // No descent left at any damping: the point is a minimum to working precision.
+                    return p;
+                }
+            }
+        }
+        // Out of iterations (typically crawling along a clamped B0'): the best point found; its residuals
+        // will tell the caller how good it is.
+        return p;
+    }
+
+    private static double cost(EquationOfState eos, double[] v, double[] e, double[] p) {
+        double c = 0;
+        for (int i = 0; i < v.length; i++) {
+            double r = eos.energy(v[i], p) - e[i];
+            c += r * r;
+        }
+        return Double.isNaN(c) ? Double.POSITIVE_INFINITY : c;
+    }
+
+    private static double[] parabolaStart(double[] v, double[] e) {
+        double[] c = PolynomialFit.of(v, e, 2).coefficients();
+        if (!(c[2] > 0)) {
+            return null;
+        }
+        double v0 = -c[1] / (2 * c[2]);
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = 0;
+        for (double x : v) {
+            lo = Math.min(lo, x);
+            hi = Math.max(hi, x);
+        }
+        v0 = Math.min(Math.max(v0, 0.8 * lo), 1.2 * hi);
+        return new double[] {c[0] + c[1] * v0 + c[2] * v0 * v0, v0, 2 * c[2] * v0, 4.0};
+    }
+
+    private static RealVector keepInRange(RealVector p) {
+        double[] q = p.toArray();
+        q[1] = Math.max(q[1], 1e-3);
+        q[2] = Math.max(q[2], 1e-12);
+        q[3] = Math.min(Math.max(q[3], MIN_PRESSURE_DERIVATIVE), MAX_PRESSURE_DERIVATIVE);
+        return new ArrayRealVector(q, false);
+    }
+
+    /** The model values and a central-difference Jacobian (steps of 1e-6 relative: error ~1e-12 relative). */
+    private static Pair<RealVector, RealMatrix> model(EquationOfState eos, double[] v, RealVector point) {
+        double[] p = point.toArray();
+        int n = v.length;
+        double[] values = new double[n];
+        double[][] jac = new double[n][4];
+        for (int i = 0; i < n; i++) {
+            values[i] = eos.energy(v[i], p);
+        }
+        for (int k = 0; k < 4; k++) {
+            double h = 1e-6 * Math.max(Math.abs(p[k]), 1e-3);
+            double[] up = p.clone();
+            double[] down = p.clone();
+            up[k] += h;
+            down[k] -= h;
+            for (int i = 0; i < n; i++) {
+                jac[i][k] = (eos.energy(v[i], up) - eos.energy(v[i], down)) / (2 * h);
+            }
+        }
+        return new Pair<>(new ArrayRealVector(values, false), new Array2DRowRealMatrix(jac, false));
+    }
+}
