@@ -20,12 +20,12 @@ package org.statesum.engine;
  * Measuring every level from the dominant one keeps the differences d_i and L_i - L_m exact or
  * small, so thermally relevant levels lose no digits to a far-away ground level.
  *
- * <p>The loops are laid out for speed rather than in the order of the steps above: the maximum
- * without its index; the exponentials alone (a call to exp forces every value live across it to
- * memory, so the loop around it carries as little as possible); the per-level error terms in an
- * element-wise loop that compiles to vector instructions; then the sums that need only the factors;
- * then those that need the mean. Every sum still runs in index order, so the results are the bits a
- * single loop per step gives, and the same on every run.
+ * <p>The loops are laid out for speed rather than in the order of the steps above: the maximum;
+ * the exponentials alone (a call to exp forces every value live across it to memory, so the loop
+ * around it carries as little as possible); the per-level error terms in element-wise loops that
+ * compile to vector instructions; then the sums that need only the factors; then those that need
+ * the mean. Every sum still runs in index order, so the results are the bits a single loop per step
+ * gives, and the same on every run.
  *
  * <p>Error bounds: a running first-order analysis in the style of Higham (Accuracy and Stability of
  * Numerical Algorithms, 2nd ed., SIAM 2002, ch. 2-4), all in {@link KernelBounds}. Per term, the
@@ -67,22 +67,17 @@ final class CanonicalKernel {
         final double[] errB = levels.logDegeneracyErrorTerms;
         final double beta = 1.0 / temperature;
 
-        // Pass 1: m = argmax_i (L_i - beta dE_i), the first index on ties. The running maximum alone
-        // (its rarely taken branch is well predicted; no index to carry) is a tight loop; the scan
-        // after it finds the first index that attains the maximum, the level the old loop picked.
+        // Pass 1: m = argmax_i (L_i - beta dE_i), the first index on ties. The update is rarely taken,
+        // so its branch is well predicted and the loop runs at the speed of the loads.
         double a = Double.NEGATIVE_INFINITY;
+        int m = 0;
         for (int i = 0; i < n; i++) {
             double y = lg[i] - dE[i] * beta;
             if (y > a) {
                 a = y;
+                m = i;
             }
         }
-        int m = 0;
-        while (m < n && lg[m] - dE[m] * beta != a) {
-            m++;
-        }
-        // Not found only if some exponent is NaN, which the level set's range checks exclude.
-        m = m < n ? m : 0;
 
         // m maximises the computed y_i, not the exact one; but a level can compete with the maximum only
         // when |ln g| and beta dE are below about 2e12 (LevelSet caps |ln g| at 1e12), where y carries
