@@ -17,7 +17,7 @@ public final class App {
 
     public static Javalin create(ServiceConfig config) {
         ObjectMapper mapper = JsonSupport.mapper(config);
-        BodyReader bodies = new BodyReader(mapper, config.maxBodyBytes());
+        BodyReader bodies = new BodyReader(mapper, config);
         ComputeRoutes compute = routes(config);
         SampledController sampled = new SampledController(mapper);
         ConstantsController constants;
@@ -29,16 +29,22 @@ public final class App {
         byte[] openApi = resource(OPENAPI_RESOURCE);
         byte[] live = "{\"status\":\"up\"}".getBytes(java.nio.charset.StandardCharsets.UTF_8);
         ProblemMapper problems = new ProblemMapper(mapper);
+        // The Allow header of a 405 on these paths (the compute routes register theirs below).
+        for (String path : new String[] {"/v1/constants", "/openapi.yaml", "/health/live", "/health/ready"}) {
+            problems.allow("GET", path);
+        }
         return Javalin.create(javalin -> {
             javalin.startup.showJavalinBanner = false;
             javalin.startup.showOldJavalinVersionWarning = false;
             javalin.jetty.port = config.port();
             javalin.http.maxRequestSize = config.maxBodyBytes();
+            javalin.http.prefer405over404 = true;
             problems.register(javalin);
-            compute.all().forEach((path, endpoint) -> javalin.routes.post(path,
-                    ctx -> Responses.json(ctx, mapper, endpoint.answer(bodies.read(ctx)))));
+            compute.all().forEach((path, endpoint) -> javalin.routes.post(problems.allow("POST", path),
+                    ctx -> Responses.json(ctx, mapper, FiniteNumbers.answer(bodies.read(ctx), endpoint))));
             // Streamed rather than parsed into a tree: its matrices reach 1e7 numbers (see SampledBodyParser).
-            javalin.routes.post("/v1/sampled", ctx -> Responses.json(ctx, mapper, sampled.answer(bodies.open(ctx))));
+            javalin.routes.post(problems.allow("POST", "/v1/sampled"),
+                    ctx -> Responses.json(ctx, mapper, sampled.answer(bodies.open(ctx))));
             javalin.routes.get("/v1/constants", constants::get);
             javalin.routes.get("/openapi.yaml", ctx -> ctx.contentType("application/yaml").result(openApi));
             javalin.routes.get("/health/live", ctx -> ctx.contentType("application/json").result(live));

@@ -6,40 +6,51 @@ import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.exc.StreamConstraintsException;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.exc.MismatchedInputException;
 import io.javalin.http.Context;
 import java.io.IOException;
 import java.io.InputStream;
 import java.util.List;
+import java.util.Locale;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import java.util.zip.GZIPInputStream;
 
 /**
  * Reads a request body into a JSON tree: 415 unless the media type is JSON, 413 beyond the size
- * limit, 400 for anything the parser will not accept (syntax, NaN tokens, duplicate keys, nesting or
- * string limits), with the JSON Pointer of the place where reading stopped. A body sent with
+ * limit (declared or actually sent), 400 for anything the parser will not accept (syntax, duplicate
+ * keys, nesting, string or number limits), with the JSON Pointer of the place where reading stopped.
+ * NaN and Infinity tokens are read; {@link FiniteNumbers} answers them with a 422. A body sent with
  * {@code Content-Encoding: gzip} is inflated, and the limit applies to the inflated size.
  */
 final class BodyReader {
 
     /** Inflater input buffer: large enough to keep the inflater busy on a multi-megabyte body. */
     private static final int GZIP_BUFFER_BYTES = 1 << 16;
+    /** Words that betray the parser's internals; a message containing one is replaced by a plain one. */
+    private static final Pattern INTERNAL = Pattern.compile(
+            "jackson|feature|java|class|source:|redacted|jsonnode|token \\(of type|`", Pattern.CASE_INSENSITIVE);
+    /** The limit a constraint message names: "... exceeds the maximum allowed (32, from ...)". */
+    private static final Pattern ALLOWED = Pattern.compile("maximum allowed \\((\\d+)");
 
     private final ObjectMapper mapper;
     private final long maxBodyBytes;
 
-    BodyReader(ObjectMapper mapper, long maxBodyBytes) {
+    BodyReader(ObjectMapper mapper, ServiceConfig config) {
         this.mapper = mapper;
-        this.maxBodyBytes = maxBodyBytes;
+        this.maxBodyBytes = config.maxBodyBytes();
     }
 
     JsonNode read(Context ctx) {
-        byte[] body = readBounded(ctx);
-        if (body.length == 0) {
-            throw ProblemException.unreadable("the request body is empty", "");
-        }
+        return parse(readBounded(ctx));
+    }
+
+    /** Parses a complete body; 400 for an empty body or anything the parser refuses. */
+    JsonNode parse(byte[] body) {
         try {
-            JsonNode root = mapper.readTree(body);
+            JsonNode root = body.length == 0 ? null : mapper.readTree(body);
             if (root == null || root.isMissingNode()) {
-                throw ProblemException.unreadable("the request body is empty", "");
+                throw ProblemException.unreadable("the request body is empty; send one JSON object", "");
             }
             return root;
         } catch (IOException e) {
@@ -55,22 +66,31 @@ final class BodyReader {
      */
     InputStream open(Context ctx) {
         requireJson(ctx.contentType());
-        long declared = ctx.contentLength();
-        if (declared > maxBodyBytes) {
-            throw tooLarge();
-        }
         try {
-            InputStream in = ctx.req().getInputStream();
+            InputStream raw = ctx.req().getInputStream();
+            long declared = ctx.contentLength();
+            if (declared > maxBodyBytes) {
+                // A client that waits for "100 Continue" has sent nothing; one that did not is sending
+                // now and would see a broken pipe instead of the answer, so a modest excess is dropped.
+                if (!expectsContinue(ctx) && declared <= maxBodyBytes + drainLimit()) {
+                    drain(raw, declared);
+                }
+                throw tooLarge();
+            }
+            InputStream in = raw;
             String coding = ctx.header("Content-Encoding");
-            String name = coding == null ? "identity" : coding.trim().toLowerCase(java.util.Locale.ROOT);
+            String name = coding == null ? "identity" : coding.trim().toLowerCase(Locale.ROOT);
             if (name.equals("gzip") || name.equals("x-gzip")) {
-                in = new GZIPInputStream(in, GZIP_BUFFER_BYTES);
+                in = new GZIPInputStream(raw, GZIP_BUFFER_BYTES);
             } else if (!name.equals("identity") && !name.isEmpty()) {
                 throw new ProblemException(Problem.of("unsupported-media-type", "Unsupported content coding", 415,
                         "send the body uncompressed or with Content-Encoding: gzip (got '" + coding + "')",
                         List.of(new FieldError("", "Content-Encoding must be gzip or absent"))));
             }
-            return new LimitedInputStream(in, maxBodyBytes, this::tooLarge);
+            return new LimitedInputStream(in, maxBodyBytes, () -> {
+                drain(raw, drainLimit());
+                return tooLarge();
+            });
         } catch (IOException e) {
             throw ProblemException.unreadable("the gzip body could not be decoded", "");
         }
@@ -84,6 +104,9 @@ final class BodyReader {
         if (failure instanceof JsonParseException e) {
             return ProblemException.unreadable("the body is not valid JSON at line " + e.getLocation().getLineNr()
                     + ", column " + e.getLocation().getColumnNr() + ": " + clean(e.getOriginalMessage()), pointerOf(e));
+        }
+        if (failure instanceof MismatchedInputException) {
+            return ProblemException.unreadable("the body holds more than one JSON value; send exactly one object", "");
         }
         if (failure instanceof JsonProcessingException e) {
             return ProblemException.unreadable("the body is not valid JSON: " + clean(e.getOriginalMessage()),
@@ -104,6 +127,29 @@ final class BodyReader {
         }
     }
 
+    /** How much of an oversized body is read and dropped so that the client gets the 413: the limit again. */
+    private long drainLimit() {
+        return maxBodyBytes;
+    }
+
+    private static boolean expectsContinue(Context ctx) {
+        String expect = ctx.header("Expect");
+        return expect != null && expect.trim().equalsIgnoreCase("100-continue");
+    }
+
+    /** Reads and drops up to {@code bytes} bytes, 8 KiB at a time. */
+    private static void drain(InputStream in, long bytes) {
+        byte[] sink = new byte[8192];
+        long left = bytes;
+        try {
+            for (int n; left > 0 && (n = in.read(sink, 0, (int) Math.min(sink.length, left))) > 0; ) {
+                left -= n;
+            }
+        } catch (IOException e) {
+            // the client went away; nothing more to drop
+        }
+    }
+
     private ProblemException tooLarge() {
         return new ProblemException(Problem.of("body-too-large", "Request body too large", 413,
                 "the request body exceeds the limit of " + maxBodyBytes + " bytes (STATESUM_MAX_BODY_BYTES)",
@@ -111,7 +157,7 @@ final class BodyReader {
     }
 
     static void requireJson(String contentType) {
-        String type = contentType == null ? "" : contentType.split(";", 2)[0].trim().toLowerCase(java.util.Locale.ROOT);
+        String type = contentType == null ? "" : contentType.split(";", 2)[0].trim().toLowerCase(Locale.ROOT);
         if (!type.equals("application/json")) {
             throw new ProblemException(Problem.of("unsupported-media-type", "Unsupported media type", 415,
                     "send the body as application/json (got '" + (contentType == null ? "" : contentType) + "')",
@@ -119,29 +165,40 @@ final class BodyReader {
         }
     }
 
+    /** Which limit was hit, with its configured value as the parser reports it. */
     private static String limitName(StreamConstraintsException e) {
         String message = String.valueOf(e.getOriginalMessage());
-        if (message.contains("nesting")) {
-            return "nesting too deep (STATESUM_MAX_NESTING_DEPTH)";
+        Matcher allowed = ALLOWED.matcher(message);
+        String limit = allowed.find() ? allowed.group(1) : "the configured limit";
+        String lower = message.toLowerCase(Locale.ROOT);
+        if (lower.startsWith("document nesting")) {
+            return "nesting deeper than " + limit + " levels (STATESUM_MAX_NESTING_DEPTH)";
         }
-        if (message.contains("String")) {
-            return "string too long (STATESUM_MAX_STRING_LENGTH)";
+        if (lower.startsWith("name length")) {
+            return "a member name longer than " + limit + " characters (STATESUM_MAX_STRING_LENGTH)";
         }
-        if (message.contains("Number")) {
-            return "number too long (1000 characters)";
+        if (lower.startsWith("string value length")) {
+            return "a string longer than " + limit + " characters (STATESUM_MAX_STRING_LENGTH)";
         }
-        return "document too large";
+        if (lower.startsWith("number value length")) {
+            return "a number longer than " + limit + " characters";
+        }
+        return "a body longer than " + limit + " bytes (STATESUM_MAX_BODY_BYTES)";
     }
 
-    /** The parser's message without its advice on parser features or anything after the first line. */
+    /**
+     * The parser's message reduced to what a client can use: its first line, without advice on parser
+     * features, source locations or type names; a message that still mentions internals becomes
+     * "syntax error".
+     */
     static String clean(String message) {
-        String text = message == null ? "syntax error" : message.split("\n", 2)[0];
-        int advice = text.indexOf(": enable");
-        if (advice < 0) {
-            advice = text.indexOf("; enable");
+        String text = message == null ? "" : message.split("\n", 2)[0];
+        for (String cut : new String[] {": enable", "; enable", " (bound as", " (start marker at", " at [Source"}) {
+            int at = text.indexOf(cut);
+            text = at >= 0 ? text.substring(0, at) : text;
         }
-        text = advice >= 0 ? text.substring(0, advice) : text;
-        return text.replaceAll("\\(for [^)]*\\)", "").replace("`", "'").trim();
+        text = text.replaceAll("\\(for [^)]*\\)", "").replaceAll("\\[Source:[^]]*]", "").trim();
+        return text.isEmpty() || INTERNAL.matcher(text).find() ? "syntax error" : text;
     }
 
     private static String pointerOf(JsonProcessingException e) {

@@ -55,8 +55,9 @@ final class ConstantsController {
         }
         doc.put("energyUnits", units);
         doc.put("temperatureUnit", "K");
-        doc.put("molarConvention", "a molar unit is per mole of the entities the answer describes: particles "
-                + "for the per-particle basis, whole N-particle systems for the total basis");
+        doc.put("molarConvention", "a molar unit (kJ/mol, kcal/mol and their entropy units) is per mole of "
+                + "particles: for the total of N particles it reports the total divided by the amount N / N_A, "
+                + "which equals the per-particle value times N_A");
         doc.put("cautions", CAUTIONS);
         return doc;
     }

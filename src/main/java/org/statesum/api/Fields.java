@@ -19,7 +19,13 @@ final class Fields {
 
     private final List<FieldError> errors = new ArrayList<>();
 
+    /** Records a problem; only the first one found at a pointer is kept ("is required", not also "must be a number"). */
     void add(String pointer, String message) {
+        for (FieldError known : errors) {
+            if (known.pointer().equals(pointer)) {
+                return;
+            }
+        }
         errors.add(new FieldError(pointer, message));
     }
 

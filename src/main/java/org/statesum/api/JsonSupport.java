@@ -19,9 +19,14 @@ import java.io.IOException;
 /**
  * The one configured {@link ObjectMapper}: stream limits from the service configuration, duplicate
  * keys rejected, no coercion of strings to numbers, and non-finite numbers never written (a NaN in a
- * {@code double[]} becomes JSON {@code null}, which the contract uses for undefined points).
+ * {@code double[]} or a {@code Double} becomes JSON {@code null}, which the contract uses for
+ * undefined points). The tokens NaN and Infinity are read, only so that {@link FiniteNumbers} can name
+ * every one of them in a single 422 instead of the parser stopping at the first.
  */
 public final class JsonSupport {
+
+    /** Longest number literal accepted, in characters: far beyond the 17 digits a double holds. */
+    static final int MAX_NUMBER_LENGTH = 1000;
 
     private JsonSupport() {
     }
@@ -31,12 +36,12 @@ public final class JsonSupport {
                 .streamReadConstraints(StreamReadConstraints.builder()
                         .maxNestingDepth(config.maxNestingDepth())
                         .maxStringLength(config.maxStringLength())
-                        .maxNumberLength(1000)
+                        .maxNumberLength(MAX_NUMBER_LENGTH)
                         .maxNameLength(config.maxStringLength())
                         .maxDocumentLength(config.maxBodyBytes())
                         .build())
                 .streamWriteConstraints(StreamWriteConstraints.builder().maxNestingDepth(64).build())
-                .disable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS)
+                .enable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS)
                 .disable(JsonWriteFeature.WRITE_NAN_AS_STRINGS)
                 .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
                 // Correctly rounded like Double.parseDouble (the same doubles), several times faster:
@@ -45,6 +50,8 @@ public final class JsonSupport {
                 .build();
         SimpleModule finiteOnly = new SimpleModule("finite-only");
         finiteOnly.addSerializer(double[].class, new FiniteArraySerializer());
+        finiteOnly.addSerializer(Double.class, new FiniteDoubleSerializer());
+        finiteOnly.addSerializer(Double.TYPE, new FiniteDoubleSerializer());
         return JsonMapper.builder(factory)
                 .enable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
                 .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
@@ -73,6 +80,25 @@ public final class JsonSupport {
                 }
             }
             gen.writeEndArray();
+        }
+    }
+
+    /** Writes a double, or null when it is not finite. */
+    private static final class FiniteDoubleSerializer extends StdSerializer<Double> {
+
+        private static final long serialVersionUID = 1L;
+
+        FiniteDoubleSerializer() {
+            super(Double.class);
+        }
+
+        @Override
+        public void serialize(Double value, JsonGenerator gen, SerializerProvider provider) throws IOException {
+            if (Double.isFinite(value)) {
+                gen.writeNumber(value);
+            } else {
+                gen.writeNull();
+            }
         }
     }
 }

@@ -5,6 +5,10 @@ import io.javalin.config.JavalinConfig;
 import io.javalin.http.Context;
 import io.javalin.http.HttpResponseException;
 import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.concurrent.ConcurrentHashMap;
+import java.util.concurrent.ConcurrentSkipListSet;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 import org.statesum.engine.DomainException;
@@ -18,10 +22,22 @@ final class ProblemMapper {
 
     private static final Logger LOG = LoggerFactory.getLogger(ProblemMapper.class);
 
+    private static final byte[] INTERNAL_ERROR = ("{\"type\":\"https://statesum.org/problems/internal-error\","
+            + "\"title\":\"Internal error\",\"status\":500,\"detail\":\"the service failed to answer this request; "
+            + "it has been logged\",\"errors\":[]}").getBytes(java.nio.charset.StandardCharsets.UTF_8);
+
     private final ObjectMapper mapper;
+    /** The methods each path serves, for the Allow header of a 405 (RFC 9110, section 15.5.6). */
+    private final Map<String, Set<String>> allowed = new ConcurrentHashMap<>();
 
     ProblemMapper(ObjectMapper mapper) {
         this.mapper = mapper;
+    }
+
+    /** Records that {@code path} serves {@code method}; returns the path. */
+    String allow(String method, String path) {
+        allowed.computeIfAbsent(path, p -> new ConcurrentSkipListSet<>()).add(method);
+        return path;
     }
 
     void register(JavalinConfig config) {
@@ -33,8 +49,22 @@ final class ProblemMapper {
             LOG.error("unhandled exception on {} {}", ctx.method(), ctx.path(), e);
             write(ctx, fromStatus(500));
         });
+        // An Error (out of memory, say) bypasses the exception mappers; answer it with the same bare 500.
+        config.router.javaLangErrorHandler((res, error) -> {
+            LOG.error("unhandled error", error);
+            try {
+                res.setStatus(500);
+                res.setContentType(Problem.MEDIA_TYPE);
+                res.getOutputStream().write(INTERNAL_ERROR);
+            } catch (java.io.IOException | IllegalStateException e) {
+                LOG.error("could not write a problem", e);
+            }
+        });
         for (int status : new int[] {404, 405}) {
             config.routes.error(status, "*", ctx -> {
+                if (status == 405 && allowed.containsKey(ctx.path())) {
+                    ctx.header("Allow", String.join(", ", allowed.get(ctx.path())));
+                }
                 if (!Problem.MEDIA_TYPE.equals(ctx.res().getContentType())) {
                     write(ctx, fromStatus(status));
                 }
@@ -47,8 +77,7 @@ final class ProblemMapper {
             ctx.status(problem.status()).contentType(Problem.MEDIA_TYPE).result(mapper.writeValueAsBytes(problem));
         } catch (Exception e) {
             LOG.error("could not write a problem", e);
-            ctx.status(500).contentType(Problem.MEDIA_TYPE).result("{\"type\":\"about:blank\",\"title\":"
-                    + "\"Internal error\",\"status\":500,\"detail\":\"internal error\",\"errors\":[]}");
+            ctx.status(500).contentType(Problem.MEDIA_TYPE).result(INTERNAL_ERROR);
         }
     }
 

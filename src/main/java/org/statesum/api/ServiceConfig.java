@@ -10,12 +10,15 @@ import java.util.Map;
  *
  * @param port HTTP port ({@code STATESUM_PORT}, 8080; 0 picks a free port)
  * @param maxBodyBytes largest request body after any gzip decoding ({@code STATESUM_MAX_BODY_BYTES},
- *        256 MiB, room for a 10 x 1e6 reduced-potential matrix at full precision): 413 beyond
+ *        256 MiB, room for a 10 x 1e6 reduced-potential matrix at full precision): 413 beyond. A
+ *        double takes at most 25 bytes in compact JSON (24 characters and a comma), so a request of
+ *        one million levels with energies and degeneracies (2 x 25 MB) fits easily
  * @param maxNestingDepth deepest JSON nesting ({@code STATESUM_MAX_NESTING_DEPTH}, 32)
  * @param maxStringLength longest JSON string ({@code STATESUM_MAX_STRING_LENGTH}, 4096 chars)
  * @param maxLevels most levels in one level set ({@code STATESUM_MAX_LEVELS}, 2 000 000)
  * @param maxTemperatures most temperatures in one grid ({@code STATESUM_MAX_TEMPERATURES}, 100 000)
- * @param computeBudget most (level, temperature) pairs in one job ({@code STATESUM_COMPUTE_BUDGET}, 1e9)
+ * @param computeBudget most (level, temperature) pairs in one job ({@code STATESUM_COMPUTE_BUDGET}, 1e9:
+ *        one million levels on a thousand temperatures)
  * @param maxPopulationCells most (level, temperature) populations returned
  *        ({@code STATESUM_MAX_POPULATION_CELLS}, 1 000 000)
  */

@@ -27,9 +27,10 @@ final class SpectrumController implements ComputeEndpoint {
         system.put("statistics", job.particles().statistics() == ParticleStatistics.INDISTINGUISHABLE
                 ? "indistinguishable" : "distinguishable");
         system.put("basis", job.particles().perParticle() ? "per-particle" : "total");
-        Map<String, Object> answer = ThermoResponse.of(result, job.outputUnit(), system);
-        HeatCapacityMaximum.locate(job.levels(), job.particles(), result).ifPresent(max ->
-                answer.put("heatCapacityMaximum", HeatCapacityMaximumAnswer.of(max, job.outputUnit())));
+        double particlesPerEntity = job.particles().perParticle() ? 1 : job.particles().count();
+        Map<String, Object> answer = ThermoResponse.of(result, job.outputUnit(), system, particlesPerEntity);
+        HeatCapacityMaximum.locate(job.levels(), job.particles(), result).ifPresent(max -> answer.put(
+                "heatCapacityMaximum", HeatCapacityMaximumAnswer.of(max, job.outputUnit(), particlesPerEntity)));
         return answer;
     }
 }

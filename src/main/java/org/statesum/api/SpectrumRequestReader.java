@@ -61,14 +61,17 @@ final class SpectrumRequestReader {
         boolean hasG = node.has("degeneracies");
         boolean hasLogG = node.has("logDegeneracies");
         if (hasG && hasLogG) {
-            fields.add("/levels", "give 'degeneracies' or 'logDegeneracies', not both");
+            fields.add("/levels/logDegeneracies", "give 'degeneracies' or 'logDegeneracies', not both");
+            fields.numbers(node.get("degeneracies"), "/levels/degeneracies", config.maxLevels());
+            checkWeights(node.get("degeneracies"), false, fields);
             return Optional.empty();
         }
         String gName = hasLogG ? "logDegeneracies" : "degeneracies";
         Optional<double[]> weights = hasG || hasLogG
                 ? fields.numbers(node.get(gName), "/levels/" + gName, config.maxLevels())
                 : energies.map(e -> filled(e.length, 1.0));
-        boolean good = weights.isPresent() && checkWeights(weights.get(), hasLogG, fields);
+        // Every number given is checked, even when some other element is not a number.
+        boolean good = checkWeights(node.get(gName), hasLogG, fields) && weights.isPresent();
         JsonNode energyNode = node.get("energies");
         JsonNode weightNode = node.get(gName);
         if (energyNode != null && energyNode.isArray() && weightNode != null && weightNode.isArray()
@@ -100,14 +103,19 @@ final class SpectrumRequestReader {
         return Optional.of(set.withEnergyRelativeError(2 * EnergyUnit.conversionRelativeError()));
     }
 
-    private static boolean checkWeights(double[] w, boolean logarithmic, Fields fields) {
+    /** Checks each numeric element of a (log-)degeneracy array; true when none is out of range. */
+    private static boolean checkWeights(JsonNode array, boolean logarithmic, Fields fields) {
         boolean good = true;
-        for (int i = 0; i < w.length; i++) {
-            if (logarithmic && !(Math.abs(w[i]) <= LevelSet.MAX_ABS_LOG_DEGENERACY)) {
+        for (int i = 0; array != null && array.isArray() && i < array.size(); i++) {
+            if (!array.get(i).isNumber()) {
+                continue;
+            }
+            double w = array.get(i).doubleValue();
+            if (logarithmic && !(Math.abs(w) <= LevelSet.MAX_ABS_LOG_DEGENERACY)) {
                 fields.add("/levels/logDegeneracies/" + i, "must be at most " + LevelSet.MAX_ABS_LOG_DEGENERACY
                         + " in magnitude");
                 good = false;
-            } else if (!logarithmic && !(w[i] > 0)) {
+            } else if (!logarithmic && !(w > 0)) {
                 fields.add("/levels/degeneracies/" + i, "a degeneracy must be positive");
                 good = false;
             }
@@ -124,12 +132,12 @@ final class SpectrumRequestReader {
     }
 
     private static Particles readParticles(JsonNode root, Fields fields) {
+        boolean perParticle = root.has("basis")
+                && fields.oneOf(root.get("basis"), "/basis", BASES).map("per-particle"::equals).orElse(false);
         JsonNode node = root.get("particles");
         if (node == null) {
             return Particles.single();
         }
-        boolean perParticle = root.has("basis")
-                && fields.oneOf(root.get("basis"), "/basis", BASES).map("per-particle"::equals).orElse(false);
         if (!fields.object(node, "/particles", Set.of("count", "statistics"))) {
             return Particles.single();
         }
@@ -139,7 +147,7 @@ final class SpectrumRequestReader {
         if (count.isPresent()) {
             double n = count.getAsDouble();
             if (!(n >= 1 && n <= CompositeSystem.MAX_PARTICLES && Math.rint(n) == n)) {
-                fields.add("/particles/count", "must be an integer from 1 to " + CompositeSystem.MAX_PARTICLES);
+                fields.add("/particles/count", "must be an integer from 1 to 1e30");
             }
         }
         if (fields.hasErrors() || count.isEmpty() || statistics.isEmpty()) {

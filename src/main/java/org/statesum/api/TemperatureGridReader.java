@@ -36,11 +36,12 @@ final class TemperatureGridReader {
     private static Optional<double[]> readValues(JsonNode node, String pointer, int max, Fields fields) {
         int before = fields.count();
         Optional<double[]> values = fields.numbers(node, pointer, max);
-        values.ifPresent(v -> {
-            for (int i = 0; i < v.length; i++) {
-                checkOne(v[i], pointer + "/" + i, fields);
+        // Every number given is checked, even when some other element is not a number.
+        for (int i = 0; node != null && node.isArray() && node.size() <= max && i < node.size(); i++) {
+            if (node.get(i).isNumber()) {
+                checkOne(node.get(i).doubleValue(), pointer + "/" + i, fields);
             }
-        });
+        }
         return fields.count() > before ? Optional.empty() : values;
     }
 

@@ -21,10 +21,26 @@ final class ThermoResponse {
     }
 
     static Map<String, Object> of(ThermoResult result, EnergyUnit unit, Map<String, Object> system) {
+        return of(result, unit, system, 1);
+    }
+
+    /**
+     * As {@link #of(ThermoResult, EnergyUnit, Map)}, for a result whose entity holds
+     * {@code particlesPerEntity} particles (N for the total of an N-particle system): a molar unit is
+     * per mole of particles, so its values are the result divided by N / N_A.
+     */
+    static Map<String, Object> of(ThermoResult result, EnergyUnit unit, Map<String, Object> system,
+            double particlesPerEntity) {
         Map<String, Object> body = new LinkedHashMap<>();
         body.put("temperature", Map.of("unit", "K", "values", result.temperaturesKelvin()));
+        double perParticle = unit.molar() ? 1.0 / particlesPerEntity : 1.0;
         for (Map.Entry<Quantity, Series> entry : result.series().entrySet()) {
-            body.put(wireName(entry.getKey()), series(entry.getKey(), entry.getValue(), unit));
+            Series converted = converted(entry.getKey(), entry.getValue(), unit);
+            if (perParticle != 1.0 && entry.getKey().dimension() != Quantity.Dimension.NONE) {
+                // One more factor (1/N, rounded) and product: Series.scaled adds their two roundings.
+                converted = converted.scaled(perParticle);
+            }
+            body.put(wireName(entry.getKey()), wire(symbol(entry.getKey(), unit), converted));
         }
         if (result.populations() != null) {
             Map<String, Object> populations = new LinkedHashMap<>();
@@ -45,7 +61,8 @@ final class ThermoResponse {
     /** Every series of a map, by wire name, in the output unit (as in the main answer). */
     static Map<String, Object> seriesMap(Map<Quantity, Series> series, EnergyUnit unit) {
         Map<String, Object> out = new LinkedHashMap<>();
-        series.forEach((quantity, si) -> out.put(wireName(quantity), series(quantity, si, unit)));
+        series.forEach((quantity, si) -> out.put(wireName(quantity),
+                wire(symbol(quantity, unit), converted(quantity, si, unit))));
         return out;
     }
 
@@ -72,29 +89,38 @@ final class ThermoResponse {
         };
     }
 
+    /** One series in the output unit, in wire form ({@code unit}, {@code values}, {@code errorBounds}). */
     static Map<String, Object> series(Quantity quantity, Series si, EnergyUnit unit) {
+        return wire(symbol(quantity, unit), converted(quantity, si, unit));
+    }
+
+    private static Series converted(Quantity quantity, Series si, EnergyUnit unit) {
+        return switch (quantity.dimension()) {
+            case ENERGY -> si.scaled(1.0 / unit.joulesPerUnit());
+            case ENTROPY -> si.scaled(unit.entropyFromJoulesPerKelvin(1.0));
+            default -> si;
+        };
+    }
+
+    private static String symbol(Quantity quantity, EnergyUnit unit) {
+        return switch (quantity.dimension()) {
+            case ENERGY -> unit.symbol();
+            case ENTROPY -> unit.entropySymbol();
+            default -> "1";
+        };
+    }
+
+    /** A series already in its unit, in wire form. */
+    static Map<String, Object> wire(String symbol, Series series) {
         Map<String, Object> out = new LinkedHashMap<>();
-        Series converted;
-        switch (quantity.dimension()) {
-            case ENERGY -> {
-                out.put("unit", unit.symbol());
-                converted = si.scaled(1.0 / unit.joulesPerUnit());
-            }
-            case ENTROPY -> {
-                out.put("unit", unit.entropySymbol());
-                converted = si.scaled(unit.entropyFromJoulesPerKelvin(1.0));
-            }
-            default -> {
-                out.put("unit", "1");
-                converted = si;
-            }
-        }
-        out.put("values", converted.values());
-        out.put("errorBounds", converted.errorBounds());
+        out.put("unit", symbol);
+        out.put("values", series.values());
+        out.put("errorBounds", series.errorBounds());
         return out;
     }
 
-    private static List<Map<String, Object>> warnings(List<Warning> warnings) {
+    /** Warnings in wire form. */
+    static List<Map<String, Object>> warnings(List<Warning> warnings) {
         return warnings.stream().map(w -> {
             Map<String, Object> m = new LinkedHashMap<>();
             m.put("code", w.code());

@@ -50,6 +50,11 @@ public enum EnergyUnit {
         return entropySymbol;
     }
 
+    /** Whether this is a molar unit (per mole of particles, N_A of them) rather than per particle. */
+    public boolean molar() {
+        return this == KILOJOULE_PER_MOLE || this == KILOCALORIE_PER_MOLE;
+    }
+
     /** Converts an energy per entity in joules into this unit. */
     public double fromJoules(double joules) {
         return joules / joulesPerUnit;
