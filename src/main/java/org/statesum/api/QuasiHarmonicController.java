@@ -40,10 +40,10 @@ final class QuasiHarmonicController implements ComputeEndpoint {
             for (Map.Entry<Quantity, Series> e : s.thermo().entrySet()) {
                 state.put(ThermoResponse.wireName(e.getKey()), ThermoResponse.series(e.getKey(), e.getValue(), unit));
             }
-            state.put("volume", plain(job.volumeUnit().symbol(),
+            state.put("volume", ThermoResponse.wire(job.volumeUnit().symbol(),
                     s.volumeCubicMetre().scaled(1 / job.volumeUnit().cubicMetresPerUnit())));
-            state.put("bulkModulus", plain(job.pressureUnit().symbol(), s.bulkModulusPascal().scaled(1 / pressureScale)));
-            state.put("thermalExpansion", plain("1/K", s.thermalExpansionPerKelvin()));
+            state.put("bulkModulus", ThermoResponse.wire(job.pressureUnit().symbol(), s.bulkModulusPascal().scaled(1 / pressureScale)));
+            state.put("thermalExpansion", ThermoResponse.wire("1/K", s.thermalExpansionPerKelvin()));
             states.add(state);
         }
         out.put("states", states);
@@ -60,23 +60,9 @@ final class QuasiHarmonicController implements ComputeEndpoint {
         residuals.put("rootMeanSquare", scaled(result.rmsResidualJoule(), 1 / unit.joulesPerUnit()));
         precision.put("fitResiduals", residuals);
         out.put("precision", precision);
-        out.put("warnings", result.warnings().stream().map(w -> {
-            Map<String, Object> m = new LinkedHashMap<>();
-            m.put("code", w.code());
-            m.put("message", w.message());
-            m.put("temperatures", w.temperatures());
-            return m;
-        }).toList());
+        out.put("warnings", ThermoResponse.warnings(result.warnings()));
         out.put("provenance", ThermoResponse.provenance());
         return out;
-    }
-
-    private static Map<String, Object> plain(String unit, Series s) {
-        Map<String, Object> m = new LinkedHashMap<>();
-        m.put("unit", unit);
-        m.put("values", s.values());
-        m.put("errorBounds", s.errorBounds());
-        return m;
     }
 
     private static double[] scaled(double[] a, double f) {

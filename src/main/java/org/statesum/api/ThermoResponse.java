@@ -110,7 +110,8 @@ final class ThermoResponse {
         };
     }
 
-    private static Map<String, Object> wire(String symbol, Series series) {
+    /** A series already in its unit, in wire form. */
+    static Map<String, Object> wire(String symbol, Series series) {
         Map<String, Object> out = new LinkedHashMap<>();
         out.put("unit", symbol);
         out.put("values", series.values());
@@ -118,7 +119,8 @@ final class ThermoResponse {
         return out;
     }
 
-    private static List<Map<String, Object>> warnings(List<Warning> warnings) {
+    /** Warnings in wire form. */
+    static List<Map<String, Object>> warnings(List<Warning> warnings) {
         return warnings.stream().map(w -> {
             Map<String, Object> m = new LinkedHashMap<>();
             m.put("code", w.code());

@@ -71,19 +71,25 @@ final class KernelBounds {
     }
 
     /**
-     * One term: factor t = exp(z), its exponent error e-hat (0 for the dominant level), v = beta d,
-     * d = E_i - E_m in K, and the input error rho |E_i| of its energy in K.
+     * The sums over all terms, accumulated by the caller in index order: sum t e-hat, sum t |d|,
+     * sum t rho |E_i| (K, 0 for the dominant level), the largest e-hat among the terms with a normal
+     * factor (t >= 2^-1022) and the largest e-hat of all.
      */
-    void term(double t, double z, double eh, double v, double d, double inputErrorKelvin) {
-        sumTE += t * eh;
-        maxAll = Math.max(maxAll, eh);
+    void terms(double sumTExponentError, double sumTAbsDifference, double sumTInputErrorKelvin,
+            double maxNormalExponentError, double maxExponentError) {
+        sumTE = sumTExponentError;
+        sumTAbsD = sumTAbsDifference;
+        sumTA = sumTInputErrorKelvin;
+        maxE = maxNormalExponentError;
+        maxAll = maxExponentError;
+    }
+
+    /**
+     * One term whose factor t = exp(z) is subnormal or zero (the caller sums every term into
+     * {@link #terms}): its exponent error e-hat, v = beta d and d = E_i - E_m in K.
+     */
+    void smallTerm(double t, double z, double eh, double v, double d) {
         double ad = Math.abs(d);
-        sumTAbsD += t * ad;
-        sumTA += t * inputErrorKelvin;
-        if (t >= Double.MIN_NORMAL) {
-            maxE = Math.max(maxE, eh);
-            return;
-        }
         double av = Math.abs(v);
         if (t > 0) {
             // Subnormal: exp is within 1 ulp = 2^-1074 of e^z, and e^z within a factor e^(+-e-hat) of tau.
