@@ -43,7 +43,7 @@ public final class App {
             problems.register(javalin);
             // /v1/sampled is streamed rather than parsed into a tree: its matrices reach 1e7 numbers (see
             // SampledBodyParser); in a batch, where the job body is a tree already, it reads the tree.
-            operations.install(javalin, compute, Map.of("/v1/sampled", ctx -> sampled.answer(bodies.open(ctx))));
+            operations.install(javalin, compute, Map.of("/v1/sampled", ctx -> sampled.answer(bodies.openStreamed(ctx))));
             javalin.routes.get("/v1/constants", constants::get);
             javalin.routes.get("/openapi.yaml", ctx -> ctx.contentType("application/yaml").result(openApi));
         });

@@ -34,11 +34,19 @@ final class BodyReader {
     private static final Pattern ALLOWED = Pattern.compile("maximum allowed \\((\\d+)");
 
     private final ObjectMapper mapper;
-    private final long maxBodyBytes;
+    /** For bodies read whole and parsed into a tree (their memory is a multiple of their size). */
+    private final Limit treeLimit;
+    /** For bodies parsed incrementally into arrays (/v1/sampled). */
+    private final Limit streamLimit;
+
+    /** A size limit and the variable that sets it, for the 413 message. */
+    private record Limit(long bytes, String variable) {
+    }
 
     BodyReader(ObjectMapper mapper, ServiceConfig config) {
         this.mapper = mapper;
-        this.maxBodyBytes = config.maxBodyBytes();
+        this.treeLimit = new Limit(config.maxBodyBytes(), ServiceConfig.PREFIX + "MAX_BODY_BYTES");
+        this.streamLimit = new Limit(config.maxStreamedBodyBytes(), ServiceConfig.PREFIX + "MAX_STREAMED_BODY_BYTES");
     }
 
     JsonNode read(Context ctx) {
@@ -64,7 +72,12 @@ final class BodyReader {
      * decoding (413 beyond, so a small compressed body cannot expand without bound). Any other
      * content coding is refused with 415 (RFC 9110, section 15.5.16).
      */
-    InputStream open(Context ctx) {
+    InputStream openStreamed(Context ctx) {
+        return open(ctx, streamLimit);
+    }
+
+    private InputStream open(Context ctx, Limit limit) {
+        long maxBodyBytes = limit.bytes();
         requireJson(ctx.contentType());
         try {
             InputStream raw = ctx.req().getInputStream();
@@ -72,10 +85,10 @@ final class BodyReader {
             if (declared > maxBodyBytes) {
                 // A client that waits for "100 Continue" has sent nothing; one that did not is sending
                 // now and would see a broken pipe instead of the answer, so a modest excess is dropped.
-                if (!expectsContinue(ctx) && declared <= maxBodyBytes + drainLimit()) {
+                if (!expectsContinue(ctx) && declared <= 2 * maxBodyBytes) {
                     drain(raw, declared);
                 }
-                throw tooLarge();
+                throw tooLarge(limit);
             }
             InputStream in = raw;
             String coding = ctx.header("Content-Encoding");
@@ -88,8 +101,8 @@ final class BodyReader {
                         List.of(new FieldError("", "Content-Encoding must be gzip or absent"))));
             }
             return new LimitedInputStream(in, maxBodyBytes, () -> {
-                drain(raw, drainLimit());
-                return tooLarge();
+                drain(raw, maxBodyBytes);
+                return tooLarge(limit);
             });
         } catch (IOException e) {
             throw ProblemException.unreadable("the gzip body could not be decoded", "");
@@ -120,16 +133,11 @@ final class BodyReader {
 
     /** Reads at most the limit plus one byte, so a body without Content-Length cannot exhaust memory. */
     private byte[] readBounded(Context ctx) {
-        try (InputStream in = open(ctx)) {
+        try (InputStream in = open(ctx, treeLimit)) {
             return in.readAllBytes();
         } catch (IOException e) {
             throw unreadable(e);
         }
-    }
-
-    /** How much of an oversized body is read and dropped so that the client gets the 413: the limit again. */
-    private long drainLimit() {
-        return maxBodyBytes;
     }
 
     private static boolean expectsContinue(Context ctx) {
@@ -150,10 +158,11 @@ final class BodyReader {
         }
     }
 
-    private ProblemException tooLarge() {
+    /** The 413; an oversized body is first read and dropped up to the limit again, so the client sees it. */
+    private static ProblemException tooLarge(Limit limit) {
         return new ProblemException(Problem.of("body-too-large", "Request body too large", 413,
-                "the request body exceeds the limit of " + maxBodyBytes + " bytes (STATESUM_MAX_BODY_BYTES)",
-                List.of(new FieldError("", "body larger than " + maxBodyBytes + " bytes"))));
+                "the request body exceeds the limit of " + limit.bytes() + " bytes (" + limit.variable() + ")",
+                List.of(new FieldError("", "body larger than " + limit.bytes() + " bytes"))));
     }
 
     static void requireJson(String contentType) {

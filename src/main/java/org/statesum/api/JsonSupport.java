@@ -39,7 +39,7 @@ public final class JsonSupport {
                         .maxStringLength(config.maxStringLength())
                         .maxNumberLength(MAX_NUMBER_LENGTH)
                         .maxNameLength(config.maxStringLength())
-                        .maxDocumentLength(config.maxBodyBytes())
+                        .maxDocumentLength(Math.max(config.maxBodyBytes(), config.maxStreamedBodyBytes()))
                         .build())
                 .streamWriteConstraints(StreamWriteConstraints.builder().maxNestingDepth(64).build())
                 .enable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS)

@@ -9,10 +9,10 @@ import java.util.Map;
  * protects the service is here, with its default; the README lists them.
  *
  * @param port HTTP port ({@code STATESUM_PORT}, 8080; 0 picks a free port)
- * @param maxBodyBytes largest request body after any gzip decoding ({@code STATESUM_MAX_BODY_BYTES},
- *        256 MiB, room for a 10 x 1e6 reduced-potential matrix at full precision): 413 beyond. A
- *        double takes at most 25 bytes in compact JSON (24 characters and a comma), so a request of
- *        one million levels with energies and degeneracies (2 x 25 MB) fits easily
+ * @param maxBodyBytes largest request body after any gzip decoding, for the endpoints that read the
+ *        whole body into a JSON tree ({@code STATESUM_MAX_BODY_BYTES}, 64 MiB): 413 beyond. A double
+ *        takes at most 25 bytes in compact JSON (24 characters and a comma), so one million levels with
+ *        energies and degeneracies at full precision (2 x 25 MB) fit
  * @param maxNestingDepth deepest JSON nesting ({@code STATESUM_MAX_NESTING_DEPTH}, 32)
  * @param maxStringLength longest JSON string ({@code STATESUM_MAX_STRING_LENGTH}, 4096 chars)
  * @param maxLevels most levels in one level set ({@code STATESUM_MAX_LEVELS}, 2 000 000)
@@ -23,6 +23,8 @@ import java.util.Map;
  *        ({@code STATESUM_MAX_POPULATION_CELLS}, 1 000 000)
  * @param operations overload limits, time limits, batch limits, access control and logging
  *        ({@link OperationsConfig})
+ * @param maxStreamedBodyBytes largest body, after gzip decoding, of the endpoints that parse it
+ *        incrementally into arrays, /v1/sampled ({@code STATESUM_MAX_STREAMED_BODY_BYTES}, 256 MiB)
  */
 public record ServiceConfig(
         int port,
@@ -33,9 +35,20 @@ public record ServiceConfig(
         int maxTemperatures,
         long computeBudget,
         long maxPopulationCells,
-        OperationsConfig operations) {
+        OperationsConfig operations,
+        long maxStreamedBodyBytes) {
 
     public static final String PREFIX = "STATESUM_";
+
+    /** Default limit of streamed bodies: a 10 x 1e6 reduced-potential matrix at full precision (190 MB). */
+    public static final long DEFAULT_MAX_STREAMED_BODY_BYTES = 256L << 20;
+
+    /** The settings above with the default streamed-body limit (or the tree limit, if larger). */
+    public ServiceConfig(int port, long maxBodyBytes, int maxNestingDepth, int maxStringLength, int maxLevels,
+            int maxTemperatures, long computeBudget, long maxPopulationCells, OperationsConfig operations) {
+        this(port, maxBodyBytes, maxNestingDepth, maxStringLength, maxLevels, maxTemperatures, computeBudget,
+                maxPopulationCells, operations, Math.max(maxBodyBytes, DEFAULT_MAX_STREAMED_BODY_BYTES));
+    }
 
     /** The settings above with the default operations settings. */
     public ServiceConfig(int port, long maxBodyBytes, int maxNestingDepth, int maxStringLength, int maxLevels,
@@ -46,19 +59,19 @@ public record ServiceConfig(
 
     /** The defaults, on port 8080. */
     public static ServiceConfig defaults() {
-        return new ServiceConfig(8080, 256L << 20, 32, 4096, 2_000_000, 100_000, 1_000_000_000L, 1_000_000L);
+        return new ServiceConfig(8080, 64L << 20, 32, 4096, 2_000_000, 100_000, 1_000_000_000L, 1_000_000L);
     }
 
     /** A copy listening on another port (0 for any free port, as tests use). */
     public ServiceConfig withPort(int newPort) {
         return new ServiceConfig(newPort, maxBodyBytes, maxNestingDepth, maxStringLength, maxLevels,
-                maxTemperatures, computeBudget, maxPopulationCells, operations);
+                maxTemperatures, computeBudget, maxPopulationCells, operations, maxStreamedBodyBytes);
     }
 
     /** A copy with other operations settings. */
     public ServiceConfig withOperations(OperationsConfig newOperations) {
         return new ServiceConfig(port, maxBodyBytes, maxNestingDepth, maxStringLength, maxLevels,
-                maxTemperatures, computeBudget, maxPopulationCells, newOperations);
+                maxTemperatures, computeBudget, maxPopulationCells, newOperations, maxStreamedBodyBytes);
     }
 
     /**
@@ -78,7 +91,8 @@ public record ServiceConfig(
                 (int) read(env, "MAX_TEMPERATURES", d.maxTemperatures, 1, 10_000_000, problems),
                 read(env, "COMPUTE_BUDGET", d.computeBudget, 1, Long.MAX_VALUE / 2, problems),
                 read(env, "MAX_POPULATION_CELLS", d.maxPopulationCells, 0, 100_000_000, problems),
-                OperationsConfig.fromEnvironment(env, problems));
+                OperationsConfig.fromEnvironment(env, problems),
+                read(env, "MAX_STREAMED_BODY_BYTES", d.maxStreamedBodyBytes, 1024, Integer.MAX_VALUE - 8, problems));
         if (!problems.isEmpty()) {
             throw new IllegalArgumentException(String.join("; ", problems));
         }

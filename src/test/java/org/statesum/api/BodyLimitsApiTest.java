@@ -20,7 +20,7 @@ import org.statesum.testing.TestServer;
 class BodyLimitsApiTest {
 
     private static final long FIFTY_MIB = 50L << 20;
-    /** A deployment that serves level sets only, with a 48 MiB limit (the default, 256 MiB, suits sampled matrices). */
+    /** A deployment with a 48 MiB limit for tree-parsed bodies (the default is 64 MiB). */
     private static final ServiceConfig FORTY_EIGHT_MIB = new ServiceConfig(0, 48L << 20, 32, 4096, 2_000_000, 100_000,
             1_000_000_000L, 1_000_000L);
 

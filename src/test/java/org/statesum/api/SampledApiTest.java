@@ -2,6 +2,7 @@ package org.statesum.api;
 
 import static org.hamcrest.Matchers.closeTo;
 import static org.hamcrest.Matchers.contains;
+import static org.hamcrest.Matchers.containsString;
 import static org.hamcrest.Matchers.equalTo;
 import static org.hamcrest.Matchers.hasItems;
 import static org.hamcrest.Matchers.lessThan;
@@ -106,13 +107,20 @@ class SampledApiTest {
     @Test
     void aGzipBombIsRefusedWith413() throws IOException {
         TestServer small = TestServer.with(ServiceConfig.fromEnvironment(
-                java.util.Map.of("STATESUM_MAX_BODY_BYTES", String.valueOf(1 << 20))));
+                java.util.Map.of("STATESUM_MAX_BODY_BYTES", String.valueOf(1 << 20),
+                        "STATESUM_MAX_STREAMED_BODY_BYTES", String.valueOf(1 << 20))));
         try {
-            // 16 MiB of blanks inflate from about 16 KiB: the limit (1 MiB) applies to the inflated size.
+            // 16 MiB of blanks inflate from about 16 KiB: the limits (1 MiB) apply to the inflated size,
+            // on the streamed route and on the routes that read the whole body.
             byte[] bomb = gzip("{\"method\": \"mbar\"" + " ".repeat(16 << 20) + "}");
             small.request().contentType("application/json").header("Content-Encoding", "gzip").body(bomb)
                     .post("/v1/sampled")
-                    .then().statusCode(413).contentType("application/problem+json");
+                    .then().statusCode(413).contentType("application/problem+json")
+                    .body("detail", containsString("STATESUM_MAX_STREAMED_BODY_BYTES"));
+            small.request().contentType("application/json").header("Content-Encoding", "gzip").body(bomb)
+                    .post("/v1/spectrum")
+                    .then().statusCode(413).contentType("application/problem+json")
+                    .body("detail", containsString("STATESUM_MAX_BODY_BYTES"));
         } finally {
             small.stop();
         }

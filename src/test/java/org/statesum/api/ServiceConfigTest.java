@@ -12,7 +12,7 @@ class ServiceConfigTest {
     @Test
     void anEmptyEnvironmentGivesTheDefaults() {
         assertEquals(ServiceConfig.defaults(), ServiceConfig.fromEnvironment(Map.of()));
-        assertEquals(new ServiceConfig(8080, 256L << 20, 32, 4096, 2_000_000, 100_000, 1_000_000_000L, 1_000_000L),
+        assertEquals(new ServiceConfig(8080, 64L << 20, 32, 4096, 2_000_000, 100_000, 1_000_000_000L, 1_000_000L),
                 ServiceConfig.defaults());
     }
 
@@ -34,6 +34,14 @@ class ServiceConfigTest {
                 "STATESUM_COMPUTE_BUDGET", "20",
                 "STATESUM_MAX_POPULATION_CELLS", "6"));
         assertEquals(new ServiceConfig(9090, 2048, 8, 100, 10, 5, 20, 6), config);
+    }
+
+    @Test
+    void theStreamedBodyLimitIsSetApartFromTheTreeLimit() {
+        assertEquals(256L << 20, ServiceConfig.defaults().maxStreamedBodyBytes());
+        ServiceConfig config = ServiceConfig.fromEnvironment(Map.of("STATESUM_MAX_STREAMED_BODY_BYTES", "4096"));
+        assertEquals(4096, config.maxStreamedBodyBytes());
+        assertEquals(64L << 20, config.maxBodyBytes());
     }
 
     @Test
