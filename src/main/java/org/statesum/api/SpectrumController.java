@@ -1,9 +1,6 @@
 package org.statesum.api;
 
 import com.fasterxml.jackson.databind.JsonNode;
-import java.util.LinkedHashMap;
-import java.util.Map;
-import org.statesum.engine.ParticleStatistics;
 import org.statesum.models.HeatCapacityMaximum;
 import org.statesum.models.LevelSetModel;
 import org.statesum.models.ThermoResult;
@@ -22,15 +19,8 @@ final class SpectrumController implements ComputeEndpoint {
         SpectrumJob job = requests.read(body);
         ThermoResult result = LevelSetModel.evaluate(job.levels(), job.temperaturesKelvin(), job.particles(),
                 job.withPopulations());
-        Map<String, Object> system = new LinkedHashMap<>();
-        system.put("particleCount", job.particles().count());
-        system.put("statistics", job.particles().statistics() == ParticleStatistics.INDISTINGUISHABLE
-                ? "indistinguishable" : "distinguishable");
-        system.put("basis", job.particles().perParticle() ? "per-particle" : "total");
-        double particlesPerEntity = job.particles().perParticle() ? 1 : job.particles().count();
-        Map<String, Object> answer = ThermoResponse.of(result, job.outputUnit(), system, particlesPerEntity);
-        HeatCapacityMaximum.locate(job.levels(), job.particles(), result).ifPresent(max -> answer.put(
-                "heatCapacityMaximum", HeatCapacityMaximumAnswer.of(max, job.outputUnit(), particlesPerEntity)));
-        return answer;
+        // written straight to the generator, the same bytes as ThermoResponse's maps (SpectrumAnswer)
+        return new SpectrumAnswer(result, job.outputUnit(), job.particles(),
+                HeatCapacityMaximum.locate(job.levels(), job.particles(), result).orElse(null));
     }
 }

@@ -32,7 +32,11 @@ final class ThermoResponse {
     static Map<String, Object> of(ThermoResult result, EnergyUnit unit, Map<String, Object> system,
             double particlesPerEntity) {
         Map<String, Object> body = new LinkedHashMap<>();
-        body.put("temperature", Map.of("unit", "K", "values", result.temperaturesKelvin()));
+        // ordered like every series ("unit", then "values"): Map.of's order changes from one JVM to the next
+        Map<String, Object> temperature = new LinkedHashMap<>();
+        temperature.put("unit", "K");
+        temperature.put("values", result.temperaturesKelvin());
+        body.put("temperature", temperature);
         double perParticle = unit.molar() ? 1.0 / particlesPerEntity : 1.0;
         for (Map.Entry<Quantity, Series> entry : result.series().entrySet()) {
             Series converted = converted(entry.getKey(), entry.getValue(), unit);
@@ -94,7 +98,8 @@ final class ThermoResponse {
         return wire(symbol(quantity, unit), converted(quantity, si, unit));
     }
 
-    private static Series converted(Quantity quantity, Series si, EnergyUnit unit) {
+    /** A series in SI converted to the output unit (energies) or its entropy unit (entropies, heat capacities). */
+    static Series converted(Quantity quantity, Series si, EnergyUnit unit) {
         return switch (quantity.dimension()) {
             case ENERGY -> si.scaled(1.0 / unit.joulesPerUnit());
             case ENTROPY -> si.scaled(unit.entropyFromJoulesPerKelvin(1.0));
@@ -102,7 +107,8 @@ final class ThermoResponse {
         };
     }
 
-    private static String symbol(Quantity quantity, EnergyUnit unit) {
+    /** The wire unit symbol of a quantity's series in the output unit. */
+    static String symbol(Quantity quantity, EnergyUnit unit) {
         return switch (quantity.dimension()) {
             case ENERGY -> unit.symbol();
             case ENTROPY -> unit.entropySymbol();

@@ -23,6 +23,10 @@ public enum EnergyUnit {
             "cm-1/K", 1.0),
     KELVIN("K", PhysicalConstants.BOLTZMANN_J_PER_K, "k_B", 1.0);
 
+    /** Read by every request: built once (an enum's static fields are set after its constants). */
+    private static final EnergyUnit[] ALL = values();
+    private static final List<String> SYMBOLS = Arrays.stream(ALL).map(EnergyUnit::symbol).toList();
+
     private final String symbol;
     private final double joulesPerUnit;
     private final String entropySymbol;
@@ -80,11 +84,16 @@ public enum EnergyUnit {
 
     /** The unit with this wire symbol, if any. */
     public static Optional<EnergyUnit> bySymbol(String symbol) {
-        return Arrays.stream(values()).filter(u -> u.symbol.equals(symbol)).findFirst();
+        for (EnergyUnit unit : ALL) {
+            if (unit.symbol.equals(symbol)) {
+                return Optional.of(unit);
+            }
+        }
+        return Optional.empty();
     }
 
-    /** All wire symbols, in declaration order. */
+    /** All wire symbols, in declaration order (one immutable list, read by every request). */
     public static List<String> symbols() {
-        return Arrays.stream(values()).map(EnergyUnit::symbol).toList();
+        return SYMBOLS;
     }
 }
