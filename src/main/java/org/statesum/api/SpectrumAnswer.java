@@ -1,10 +1,12 @@
 package org.statesum.api;
 
 import com.fasterxml.jackson.core.JsonGenerator;
+import com.fasterxml.jackson.core.io.SerializedString;
 import com.fasterxml.jackson.databind.JsonSerializable;
 import com.fasterxml.jackson.databind.SerializerProvider;
 import com.fasterxml.jackson.databind.jsontype.TypeSerializer;
 import java.io.IOException;
+import java.util.EnumMap;
 import java.util.Map;
 import org.statesum.engine.ParticleStatistics;
 import org.statesum.engine.Series;
@@ -29,14 +31,33 @@ import org.statesum.units.EnergyUnit;
 record SpectrumAnswer(ThermoResult result, EnergyUnit unit, Particles particles, HeatCapacityMaximum maximum)
         implements JsonSerializable {
 
+    // Member names encoded once: the generator copies their bytes instead of escaping them each time.
+    private static final SerializedString BASIS = new SerializedString("basis");
+    private static final SerializedString CODE = new SerializedString("code");
+    private static final SerializedString ERROR_BOUNDS = new SerializedString("errorBounds");
+    private static final SerializedString HEAT_CAPACITY_MAXIMUM = new SerializedString("heatCapacityMaximum");
+    private static final SerializedString MESSAGE = new SerializedString("message");
+    private static final SerializedString PARTICLE_COUNT = new SerializedString("particleCount");
+    private static final SerializedString POPULATIONS = new SerializedString("populations");
+    private static final SerializedString PRECISION = new SerializedString("precision");
+    private static final SerializedString PROVENANCE = new SerializedString("provenance");
+    private static final SerializedString STATISTICS = new SerializedString("statistics");
+    private static final SerializedString SYSTEM = new SerializedString("system");
+    private static final SerializedString TEMPERATURE = new SerializedString("temperature");
+    private static final SerializedString TEMPERATURES = new SerializedString("temperatures");
+    private static final SerializedString UNIT = new SerializedString("unit");
+    private static final SerializedString VALUES = new SerializedString("values");
+    private static final SerializedString WARNINGS = new SerializedString("warnings");
+    private static final Map<Quantity, SerializedString> WIRE_NAMES = wireNames();
+
     @Override
     public void serialize(JsonGenerator gen, SerializerProvider provider) throws IOException {
         double particlesPerEntity = particles.perParticle() ? 1 : particles.count();
         gen.writeStartObject();
-        gen.writeFieldName("temperature");
+        gen.writeFieldName(TEMPERATURE);
         gen.writeStartObject();
-        gen.writeStringField("unit", "K");
-        writeNumbers(gen, "values", result.temperaturesKelvin());
+        writeString(gen, UNIT, "K");
+        writeNumbers(gen, VALUES, result.temperaturesKelvin());
         gen.writeEndObject();
         double perParticle = unit.molar() ? 1.0 / particlesPerEntity : 1.0;
         for (Map.Entry<Quantity, Series> entry : result.series().entrySet()) {
@@ -45,50 +66,58 @@ record SpectrumAnswer(ThermoResult result, EnergyUnit unit, Particles particles,
             if (perParticle != 1.0 && entry.getKey().dimension() != Quantity.Dimension.NONE) {
                 converted = converted.scaled(perParticle);
             }
-            gen.writeFieldName(ThermoResponse.wireName(entry.getKey()));
+            gen.writeFieldName(WIRE_NAMES.get(entry.getKey()));
             gen.writeStartObject();
-            gen.writeStringField("unit", ThermoResponse.symbol(entry.getKey(), unit));
-            writeNumbers(gen, "values", converted.values());
-            writeNumbers(gen, "errorBounds", converted.errorBounds());
+            writeString(gen, UNIT, ThermoResponse.symbol(entry.getKey(), unit));
+            writeNumbers(gen, VALUES, converted.values());
+            writeNumbers(gen, ERROR_BOUNDS, converted.errorBounds());
             gen.writeEndObject();
         }
         if (result.populations() != null) {
-            gen.writeFieldName("populations");
+            gen.writeFieldName(POPULATIONS);
             gen.writeStartObject();
-            gen.writeStringField("unit", "1");
-            gen.writeFieldName("values");
+            writeString(gen, UNIT, "1");
+            gen.writeFieldName(VALUES);
             provider.defaultSerializeValue(result.populations().values(), gen);
-            gen.writeFieldName("errorBounds");
+            gen.writeFieldName(ERROR_BOUNDS);
             provider.defaultSerializeValue(result.populations().errorBounds(), gen);
             gen.writeEndObject();
         }
-        gen.writeFieldName("system");
+        gen.writeFieldName(SYSTEM);
         gen.writeStartObject();
-        gen.writeFieldName("particleCount");
+        gen.writeFieldName(PARTICLE_COUNT);
         writeNumber(gen, particles.count());
-        gen.writeStringField("statistics", particles.statistics() == ParticleStatistics.INDISTINGUISHABLE
+        writeString(gen, STATISTICS, particles.statistics() == ParticleStatistics.INDISTINGUISHABLE
                 ? "indistinguishable" : "distinguishable");
-        gen.writeStringField("basis", particles.perParticle() ? "per-particle" : "total");
+        writeString(gen, BASIS, particles.perParticle() ? "per-particle" : "total");
         gen.writeEndObject();
-        gen.writeFieldName("precision");
+        gen.writeFieldName(PRECISION);
         writeMap(gen, provider, result.precision());
-        gen.writeFieldName("warnings");
+        gen.writeFieldName(WARNINGS);
         gen.writeStartArray();
         for (Warning warning : result.warnings()) {
             gen.writeStartObject();
-            gen.writeStringField("code", warning.code());
-            gen.writeStringField("message", warning.message());
-            writeNumbers(gen, "temperatures", warning.temperatures());
+            writeString(gen, CODE, warning.code());
+            writeString(gen, MESSAGE, warning.message());
+            writeNumbers(gen, TEMPERATURES, warning.temperatures());
             gen.writeEndObject();
         }
         gen.writeEndArray();
-        gen.writeFieldName("provenance");
+        gen.writeFieldName(PROVENANCE);
         writeMap(gen, provider, ThermoResponse.provenance());
         if (maximum != null) {
-            gen.writeFieldName("heatCapacityMaximum");
+            gen.writeFieldName(HEAT_CAPACITY_MAXIMUM);
             provider.defaultSerializeValue(HeatCapacityMaximumAnswer.of(maximum, unit, particlesPerEntity), gen);
         }
         gen.writeEndObject();
+    }
+
+    private static Map<Quantity, SerializedString> wireNames() {
+        Map<Quantity, SerializedString> names = new EnumMap<>(Quantity.class);
+        for (Quantity quantity : Quantity.values()) {
+            names.put(quantity, new SerializedString(ThermoResponse.wireName(quantity)));
+        }
+        return names;
     }
 
     @Override
@@ -118,7 +147,12 @@ record SpectrumAnswer(ThermoResult result, EnergyUnit unit, Particles particles,
     }
 
     /** As {@link JsonSupport}'s array serializer: a non-finite element is written as null. */
-    private static void writeNumbers(JsonGenerator gen, String name, double[] values) throws IOException {
+    private static void writeString(JsonGenerator gen, SerializedString name, String value) throws IOException {
+        gen.writeFieldName(name);
+        gen.writeString(value);
+    }
+
+    private static void writeNumbers(JsonGenerator gen, SerializedString name, double[] values) throws IOException {
         gen.writeFieldName(name);
         gen.writeStartArray(values, values.length);
         for (double v : values) {

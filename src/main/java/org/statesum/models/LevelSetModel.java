@@ -124,8 +124,15 @@ public final class LevelSetModel {
                         + "(F, U, S and C_V keep their limits)", hits));
     }
 
+    /** The temperatures where {@code keep} holds, in grid order (a loop: three per request, most find none). */
     private static double[] filter(double[] temperatures, java.util.function.IntPredicate keep) {
-        return java.util.stream.IntStream.range(0, temperatures.length).filter(keep)
-                .mapToDouble(j -> temperatures[j]).toArray();
+        double[] kept = new double[temperatures.length];
+        int n = 0;
+        for (int j = 0; j < temperatures.length; j++) {
+            if (keep.test(j)) {
+                kept[n++] = temperatures[j];
+            }
+        }
+        return n == kept.length ? kept : java.util.Arrays.copyOf(kept, n);
     }
 }
