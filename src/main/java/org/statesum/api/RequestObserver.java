@@ -49,8 +49,7 @@ final class RequestObserver implements Filter {
         long start = System.nanoTime();
         String incoming = req.getHeader(REQUEST_ID);
         String id = incoming != null && SAFE_ID.matcher(incoming).matches() ? incoming : newId();
-        res.setHeader(REQUEST_ID, id);
-        SecurityHeaders.apply(res);
+        SecurityHeaders.apply(res, REQUEST_ID, id);
         metrics.inFlight().incrementAndGet();
         boolean async = false;
         try {

@@ -27,16 +27,22 @@ final class SecurityHeaders {
     private SecurityHeaders() {
     }
 
-    static void apply(HttpServletResponse res) {
+    /**
+     * Sets the security headers and one more field, {@code name: value}, of characters that need no
+     * sanitising (the request id: {@code A-Za-z0-9._:-} only), also pre-encoded.
+     */
+    static void apply(HttpServletResponse res, String name, String value) {
         ServletContextResponse jetty = ServletContextResponse.getServletContextResponse(res);
         if (jetty == null) {
             // a response not served by Jetty's servlet layer (a wrapper of another container)
+            res.setHeader(name, value);
             FIELDS.forEach(field -> res.setHeader(field.getName(), field.getValue()));
             return;
         }
         HttpFields.Mutable headers = jetty.getHeaders();
+        headers.put(new PreEncodedHttpField(name, value)); // replaces, as setHeader does
         for (PreEncodedHttpField field : FIELDS) {
-            headers.put(field); // replaces, as setHeader does
+            headers.put(field);
         }
     }
 }
