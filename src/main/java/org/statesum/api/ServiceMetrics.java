@@ -35,8 +35,8 @@ final class ServiceMetrics {
         Duration.ofSeconds(10), Duration.ofSeconds(30)};
 
     private final PrometheusMeterRegistry registry = new PrometheusMeterRegistry(PrometheusConfig.DEFAULT);
-    private final Map<String, Timer> requestTimers = new ConcurrentHashMap<>();
-    private final Map<String, Timer> computeTimers = new ConcurrentHashMap<>();
+    private final Map<RequestKey, Timer> requestTimers = new ConcurrentHashMap<>();
+    private final Map<ComputeKey, Timer> computeTimers = new ConcurrentHashMap<>();
     private final Map<String, Counter> counters = new ConcurrentHashMap<>();
     private final AtomicInteger inFlight = new AtomicInteger();
 
@@ -61,8 +61,7 @@ final class ServiceMetrics {
     }
 
     void request(String method, String route, int status, long nanos) {
-        String key = method + ' ' + route + ' ' + status;
-        requestTimers.computeIfAbsent(key, k -> Timer.builder("http.server.requests")
+        requestTimers.computeIfAbsent(new RequestKey(method, route, status), k -> Timer.builder("http.server.requests")
                 .description("HTTP requests by route, method and status")
                 .tags(Tags.of("method", method, "route", route, "status", String.valueOf(status)))
                 .serviceLevelObjectives(BUCKETS)
@@ -70,11 +69,19 @@ final class ServiceMetrics {
     }
 
     void compute(String endpoint, String outcome, long nanos) {
-        computeTimers.computeIfAbsent(endpoint + ' ' + outcome, k -> Timer.builder("statesum.compute")
+        computeTimers.computeIfAbsent(new ComputeKey(endpoint, outcome), k -> Timer.builder("statesum.compute")
                 .description("time spent computing one job (reading, validating, engine, answer), by endpoint")
                 .tags(Tags.of("endpoint", endpoint, "outcome", outcome))
                 .serviceLevelObjectives(BUCKETS)
                 .register(registry)).record(nanos, TimeUnit.NANOSECONDS);
+    }
+
+    /** A request timer's tags, as a key (no string built per request to find the timer). */
+    private record RequestKey(String method, String route, int status) {
+    }
+
+    /** A compute timer's tags, as a key. */
+    private record ComputeKey(String endpoint, String outcome) {
     }
 
     /** Counts a refused request: {@code overloaded}, {@code shutting-down} or {@code unauthorized}. */
