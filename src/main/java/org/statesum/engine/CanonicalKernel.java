@@ -45,13 +45,11 @@ final class CanonicalKernel {
     private final double[] factors;
     /** Per level, the exponent error e-hat_i of its factor and the error dq_i of q_i (scratch). */
     private final double[] exponentErrors;
-    private final double[] differenceErrors;
 
     CanonicalKernel(PreparedLevels levels) {
         this.levels = levels;
         this.factors = new double[levels.size];
         this.exponentErrors = new double[levels.size];
-        this.differenceErrors = new double[levels.size];
     }
 
     void evaluate(double temperature, int column, CanonicalColumns out) {
@@ -88,7 +86,10 @@ final class CanonicalKernel {
         // Pass 2: the factors t_i = exp(z_i) alone. With nothing but beta and the dominant level live
         // across the call to exp, this loop runs as fast as bare exponentials.
         for (int i = 0; i < n; i++) {
-            factors[i] = Math.exp((lg[i] - lgm) - (en[i] - em) * beta);
+            factors[i] = (lg[i] - lgm) - (en[i] - em) * beta;
+        }
+        for (int i = 0; i < n; i++) {
+            factors[i] = Math.exp(factors[i]);
         }
 
         // Pass 3: per level, the exponent error e-hat_i of its factor (exactly 0 for i = m: z_m = 0,
@@ -96,7 +97,6 @@ final class CanonicalKernel {
         // the compiler turns them into vector instructions (one array written per loop: C2 does not
         // vectorise a loop that stores into two).
         final double[] eh = exponentErrors;
-        final double[] dqs = differenceErrors;
         final double errM = errB[m] + beta * errA[m];
         final double errAm = errA[m];
         for (int i = 0; i < n; i++) {
@@ -104,54 +104,55 @@ final class CanonicalKernel {
             double v = (en[i] - em) * beta;
             eh[i] = U * (Math.abs(dl) + 3 * Math.abs(v) + Math.abs(dl - v)) + errB[i] + beta * errA[i] + errM;
         }
-        for (int i = 0; i < n; i++) {
-            // dq_i changes q_i^2 by (2|q_i| + dq_i) dq_i (rounding and input error of d_i).
-            dqs[i] = U * Math.abs((en[i] - em) * beta) + beta * (errA[i] + errAm);
-        }
         eh[m] = 0;
-        dqs[m] = 0;
 
-        // Pass 4: R, sum t_i d_i and the per-term sums of the error analysis, in index order. Terms
-        // with a subnormal or zero factor are counted here and handed to the bounds afterwards, also in
-        // index order, so that this loop holds no call.
+        // Pass 4: R, sum t_i d_i and the per-term sums of the error analysis, in index order. Level m
+        // adds exactly +0 to each of them (R leaves it out; d_m = 0 and e-hat_m = 0 null the others),
+        // so its factor is 0 during this pass and the loop needs no test for it. Terms with a subnormal
+        // or zero factor are counted here and handed to the bounds afterwards, also in index order, so
+        // that this loop holds no call.
         KernelBounds b = new KernelBounds(n, errM, errAm, errB[m]);
+        factors[m] = 0;
         double r = 0;
         double sumD = 0;
         double sumTE = 0;
         double sumTAbsD = 0;
         double sumTA = 0;
-        double maxE = 0;
         double maxAll = 0;
-        int small = 0;
+        int small = -1; // level m is counted
         for (int i = 0; i < n; i++) {
             double t = factors[i];
             double d = en[i] - em;
             double e = eh[i];
-            r += i == m ? 0 : t;
+            r += t;
             sumD += t * d;
             sumTE += t * e;
             sumTAbsD += t * Math.abs(d);
-            sumTA += t * (i == m ? 0 : errA[i]);
-            boolean normal = t >= Double.MIN_NORMAL;
-            // The maxima over all terms and over the normal ones; the tests are nearly always false,
-            // so well predicted (e-hat >= 0 and both start at 0, as Math.max from 0 would give).
+            sumTA += t * errA[i];
+            // The largest e-hat; the test is nearly always false, so well predicted (e-hat >= 0 and the
+            // maximum starts at 0, as Math.max from 0 would give).
             if (e > maxAll) {
                 maxAll = e;
             }
-            if (normal && e > maxE) {
-                maxE = e;
+            small += t >= Double.MIN_NORMAL ? 0 : 1;
+        }
+        // The largest e-hat among the normal factors: the same when every factor is normal.
+        double maxE = small == 0 ? maxAll : 0;
+        for (int i = 0; small > 0 && i < n; i++) {
+            if (factors[i] >= Double.MIN_NORMAL && eh[i] > maxE) {
+                maxE = eh[i];
             }
-            small += normal ? 0 : 1;
         }
         for (int i = 0; small > 0 && i < n; i++) {
             double t = factors[i];
-            if (!(t >= Double.MIN_NORMAL)) {
+            if (!(t >= Double.MIN_NORMAL) && i != m) {
                 double d = en[i] - em;
                 double v = d * beta;
                 b.smallTerm(t, (lg[i] - lgm) - v, eh[i], v, d);
                 small--;
             }
         }
+        factors[m] = 1;
         b.terms(sumTE, sumTAbsD, sumTA, maxE, maxAll);
         double s = 1 + r;
         double mean = sumD / s;
@@ -164,11 +165,13 @@ final class CanonicalKernel {
         double w3 = 0;
         for (int i = 0; i < n; i++) {
             double t = factors[i];
-            double q = ((en[i] - em) - mean) * beta;
+            double d = en[i] - em;
+            double q = (d - mean) * beta;
             double aq = Math.abs(q);
             double q2 = q * q;
             double e = eh[i];
-            double dq = dqs[i];
+            // dq_i changes q_i^2 by (2|q_i| + dq_i) dq_i (rounding and input error of d_i).
+            double dq = i == m ? 0 : U * Math.abs(d * beta) + beta * (errA[i] + errAm);
             variance += t * q2;
             w0 += t * aq;
             w1 += t * e * aq;
