@@ -110,7 +110,9 @@ public final class HarmonicModes {
         if ((long) n * theta.length >= PARALLEL_TERMS) {
             range = range.parallel();
         }
+        Runnable stop = Cancellation.current();
         range.forEach(j -> {
+            stop.run(); // a cooperative stop between temperatures (time limit, client gone); see Cancellation
             double[] out = new double[8];
             evaluateAt(temperaturesKelvin[j], out);
             for (int q = 0; q < 8; q++) {

@@ -63,6 +63,7 @@ public final class LinearRotorSum {
         double wMax = Math.max(evenWeight, oddWeight);
         double g0 = (2 * j0 + 1) * (j0 % 2 == 0 ? evenWeight : oddWeight);
         for (int j = 0; j < n; j++) {
+            Cancellation.checkpoint();
             double t = temperaturesKelvin[j];
             int last = t == 0 ? j0 : highestLevel(thetaKelvin, t, j0, wMax, g0);
             highest = Math.max(highest, last);

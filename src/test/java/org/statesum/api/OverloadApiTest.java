@@ -71,6 +71,29 @@ class OverloadApiTest {
     }
 
     @Test
+    void theTimeLimitAlsoStopsCrystalJobs() throws Exception {
+        TestServer server = TestServer.with(ServiceConfig.defaults().withOperations(
+                OperationsConfig.defaults().withTimeLimit(20)));
+        try {
+            // 2000 q-points x 9 modes x 50 000 temperatures = 9e8 mode terms (within the budget): seconds, so the
+            // problem can only come from the checkpoint between temperatures in HarmonicModes.
+            StringBuilder q = new StringBuilder();
+            for (int i = 0; i < 2000; i++) {
+                q.append(i == 0 ? "" : ",").append("{\"weight\": 1, \"frequencies\": [1, 2, 3, 4, 5, 6, 7, 8, ")
+                        .append(9 + i * 1e-3).append("]}");
+            }
+            String body = "{\"atomsPerFormulaUnit\": 3, \"vibrations\": {\"model\": \"phonons\", "
+                    + "\"frequencyUnit\": \"THz\", \"qPoints\": [" + q + "]}, "
+                    + "\"temperatures\": {\"start\": 1, \"stop\": 2000, \"count\": 50000}}";
+            server.request().contentType("application/json").body(body)
+                    .post("/v1/crystal").then().statusCode(422)
+                    .body("type", org.hamcrest.Matchers.endsWith("/time-limit-exceeded"));
+        } finally {
+            server.stop();
+        }
+    }
+
+    @Test
     void stoppingFinishesWorkInFlightWhileRefusingNewWork() throws Exception {
         TestServer server = TestServer.with(ServiceConfig.defaults());
         int port = server.port();

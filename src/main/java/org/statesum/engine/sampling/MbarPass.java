@@ -1,6 +1,7 @@
 package org.statesum.engine.sampling;
 
 import java.util.stream.IntStream;
+import org.statesum.engine.Cancellation;
 
 /**
  * One pass of the MBAR kernel over the sampled states' rows of u at trial free energies f. For each
@@ -54,8 +55,11 @@ final class MbarPass {
         if ((long) samples * k >= PARALLEL_THRESHOLD) {
             range = range.parallel();
         }
-        range.forEach(b -> partial[b] = block(f, b * BLOCK, Math.min(samples, (b + 1) * BLOCK), withP,
-                logDenominators));
+        Runnable stop = Cancellation.current();
+        range.forEach(b -> {
+            stop.run(); // a cooperative stop between blocks of samples; see Cancellation
+            partial[b] = block(f, b * BLOCK, Math.min(samples, (b + 1) * BLOCK), withP, logDenominators);
+        });
         double[] s = new double[k];
         double[] compensation = new double[k];
         double objective = 0;

@@ -7,6 +7,7 @@ import org.apache.commons.math3.exception.MathIllegalArgumentException;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.ArrayRealVector;
 import org.apache.commons.math3.linear.CholeskyDecomposition;
+import org.statesum.engine.Cancellation;
 
 /**
  * Solves the MBAR equations (see {@link Mbar}) and gathers M = W^T W for the covariance. The
@@ -232,7 +233,9 @@ final class MbarSolver {
         int n = logD.length;
         int blocks = (n + MbarPass.BLOCK - 1) / MbarPass.BLOCK;
         double[][][] partial = new double[blocks][][];
+        Runnable stop = Cancellation.current();
         IntStream.range(0, blocks).parallel().forEach(b -> {
+            stop.run(); // a cooperative stop between blocks of samples; see Cancellation
             double[][] m = new double[k][k];
             double[] w = new double[k];
             for (int s = b * MbarPass.BLOCK; s < Math.min(n, (b + 1) * MbarPass.BLOCK); s++) {

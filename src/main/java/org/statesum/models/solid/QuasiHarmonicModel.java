@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.statesum.engine.Cancellation;
 import org.statesum.engine.EosFit;
 import org.statesum.engine.EosMinimum;
 import org.statesum.engine.PolynomialFit;
@@ -58,6 +59,7 @@ public final class QuasiHarmonicModel {
         double[] start = null;
         sampler.sampleAll(temperaturesKelvin);
         for (int j = 0; j < nt; j++) {
+            Cancellation.checkpoint();
             double t = temperaturesKelvin[j];
             sampler.select(j);
             EosFit fit = EosFit.of(crystal.equationOfState(), sampler.v, sampler.f, start);
