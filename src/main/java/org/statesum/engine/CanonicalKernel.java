@@ -168,7 +168,7 @@ final class CanonicalKernel {
         // sum t_i rho |E_i| (in index order as well): exactly +0 when the energies are exact, then skipped.
         double sumTA = 0;
         for (int i = 0; levels.energiesInexact && i < n; i++) {
-            sumTA += factors[i] * errA[i];
+            sumTA += factors[i] * (i == m ? 0 : errA[i]);
         }
         factors[m] = 1;
         b.terms(sumTE, sumTAbsD, sumTA, maxE, maxAll);
