@@ -1,9 +1,10 @@
 package org.statesum.engine;
 
 /**
- * Evaluates one temperature of a prepared level set in five passes over the levels, writing into
- * the columns of a {@link CanonicalColumns}. Not thread-safe: one instance per worker (it owns the
- * scratch arrays of Boltzmann factors and their error terms).
+ * Evaluates one temperature of a prepared level set in five passes over the levels (some of them a
+ * few element-wise loops), writing into the columns of a {@link CanonicalColumns}. Not thread-safe:
+ * one instance per worker (it owns four scratch arrays of n doubles: the Boltzmann factors, the
+ * centred energies and two error terms).
  *
  * <p>Algorithm, with beta = fl(1/T) and L_i = ln g_i:
  * <ol>
@@ -20,12 +21,15 @@ package org.statesum.engine;
  * Measuring every level from the dominant one keeps the differences d_i and L_i - L_m exact or
  * small, so thermally relevant levels lose no digits to a far-away ground level.
  *
- * <p>The loops are laid out for speed rather than in the order of the steps above: the maximum;
- * the exponentials alone (a call to exp forces every value live across it to memory, so the loop
- * around it carries as little as possible); the per-level error terms in element-wise loops that
- * compile to vector instructions; then the sums that need only the factors; then those that need
- * the mean. Every sum still runs in index order, so the results are the bits a single loop per step
- * gives, and the same on every run.
+ * <p>The loops are laid out for speed rather than in the order of the steps above: (1) the maximum;
+ * (2) the exponents z_i in an element-wise loop, then the exponentials alone, in place (a call to exp
+ * forces every value live across it to memory, so the loop around it carries nothing but the array);
+ * (3) the per-level error terms; (4) the sums that need only the factors; (5) the centred q_i and
+ * the per-level error weight of V, then the sums that need the mean. The element-wise loops write one
+ * array each at the loop index, so the compiler turns them into vector instructions (it does not
+ * vectorise a loop that stores into two arrays); the sums cannot be vectorised without reordering
+ * them, so they get as little arithmetic as possible. Every sum still runs in index order, so the
+ * results are the bits a single loop per step gives, and the same on every run.
  *
  * <p>Error bounds: a running first-order analysis in the style of Higham (Accuracy and Stability of
  * Numerical Algorithms, 2nd ed., SIAM 2002, ch. 2-4), all in {@link KernelBounds}. Per term, the
@@ -42,16 +46,21 @@ final class CanonicalKernel {
     static final double ETA = Double.MIN_VALUE;
 
     private final PreparedLevels levels;
+    /** Per level (scratch): the exponent z_i, then the factor t_i. */
     private final double[] factors;
-    /** Per level, the exponent error e-hat_i of its factor and the error dq_i of q_i (scratch). */
+    /** Per level (scratch): the exponent error e-hat_i of its factor. */
     private final double[] exponentErrors;
+    /** Per level (scratch): the error dq_i of q_i, then its weight t_i (2 |q_i| + dq_i) dq_i in C_V. */
     private final double[] differenceErrors;
+    /** Per level (scratch): q_i = beta (d_i - mu). */
+    private final double[] centred;
 
     CanonicalKernel(PreparedLevels levels) {
         this.levels = levels;
         this.factors = new double[levels.size];
         this.exponentErrors = new double[levels.size];
         this.differenceErrors = new double[levels.size];
+        this.centred = new double[levels.size];
     }
 
     void evaluate(double temperature, int column, CanonicalColumns out) {
@@ -85,18 +94,19 @@ final class CanonicalKernel {
         final double lgm = lg[m];
         final double em = en[m];
         final double[] factors = this.factors;
-        // Pass 2: the factors t_i = exp(z_i) alone. With nothing but beta and the dominant level live
-        // across the call to exp, this loop runs as fast as bare exponentials.
+        // Pass 2: the exponents z_i (vectorised), then the factors t_i = exp(z_i) in place. With only
+        // the array live across the call to exp, that loop runs as fast as bare exponentials.
         for (int i = 0; i < n; i++) {
-            factors[i] = Math.exp((lg[i] - lgm) - (en[i] - em) * beta);
+            factors[i] = (lg[i] - lgm) - (en[i] - em) * beta;
+        }
+        for (int i = 0; i < n; i++) {
+            factors[i] = Math.exp(factors[i]);
         }
 
         // Pass 3: per level, the exponent error e-hat_i of its factor (exactly 0 for i = m: z_m = 0,
-        // t_m = 1) and the error dq_i of q_i from the error of d_i. Element-wise and branch-free, so
-        // the compiler turns them into vector instructions (one array written per loop: C2 does not
-        // vectorise a loop that stores into two).
+        // t_m = 1) and the error dq_i of q_i from the error of d_i (0 for i = m: d_m = 0 exactly),
+        // element-wise and branch-free.
         final double[] eh = exponentErrors;
-        final double[] dqs = differenceErrors;
         final double errM = errB[m] + beta * errA[m];
         final double errAm = errA[m];
         for (int i = 0; i < n; i++) {
@@ -104,59 +114,77 @@ final class CanonicalKernel {
             double v = (en[i] - em) * beta;
             eh[i] = U * (Math.abs(dl) + 3 * Math.abs(v) + Math.abs(dl - v)) + errB[i] + beta * errA[i] + errM;
         }
+        eh[m] = 0;
+        final double[] dqs = differenceErrors;
         for (int i = 0; i < n; i++) {
-            // dq_i changes q_i^2 by (2|q_i| + dq_i) dq_i (rounding and input error of d_i).
             dqs[i] = U * Math.abs((en[i] - em) * beta) + beta * (errA[i] + errAm);
         }
-        eh[m] = 0;
         dqs[m] = 0;
 
-        // Pass 4: R, sum t_i d_i and the per-term sums of the error analysis, in index order. Terms
-        // with a subnormal or zero factor are counted here and handed to the bounds afterwards, also in
-        // index order, so that this loop holds no call.
+        // Pass 4: R, sum t_i d_i and the per-term sums of the error analysis, in index order. Level m
+        // adds exactly +0 to each of them (R leaves it out; d_m = 0 and e-hat_m = 0 null the others),
+        // so its factor is 0 during this pass and the loop needs no test for it. Terms with a subnormal
+        // or zero factor are counted here and handed to the bounds afterwards, also in index order, so
+        // that this loop holds no call. The maximum of e-hat over the normal factors is the maximum
+        // over all when every factor is normal; otherwise it takes a loop of its own.
         KernelBounds b = new KernelBounds(n, errM, errAm, errB[m]);
+        factors[m] = 0;
         double r = 0;
         double sumD = 0;
         double sumTE = 0;
         double sumTAbsD = 0;
-        double sumTA = 0;
-        double maxE = 0;
         double maxAll = 0;
-        int small = 0;
+        int small = -1; // level m is counted
         for (int i = 0; i < n; i++) {
             double t = factors[i];
             double d = en[i] - em;
             double e = eh[i];
-            r += i == m ? 0 : t;
+            r += t;
             sumD += t * d;
             sumTE += t * e;
             sumTAbsD += t * Math.abs(d);
-            sumTA += t * (i == m ? 0 : errA[i]);
-            boolean normal = t >= Double.MIN_NORMAL;
-            // The maxima over all terms and over the normal ones; the tests are nearly always false,
-            // so well predicted (e-hat >= 0 and both start at 0, as Math.max from 0 would give).
+            // The largest e-hat; the test is nearly always false, so well predicted (e-hat >= 0 and the
+            // maximum starts at 0, as Math.max from 0 would give).
             if (e > maxAll) {
                 maxAll = e;
             }
-            if (normal && e > maxE) {
-                maxE = e;
+            small += t >= Double.MIN_NORMAL ? 0 : 1;
+        }
+        double maxE = small == 0 ? maxAll : 0;
+        for (int i = 0; small > 0 && i < n; i++) {
+            if (factors[i] >= Double.MIN_NORMAL && eh[i] > maxE) {
+                maxE = eh[i];
             }
-            small += normal ? 0 : 1;
         }
         for (int i = 0; small > 0 && i < n; i++) {
             double t = factors[i];
-            if (!(t >= Double.MIN_NORMAL)) {
+            if (!(t >= Double.MIN_NORMAL) && i != m) {
                 double d = en[i] - em;
                 double v = d * beta;
                 b.smallTerm(t, (lg[i] - lgm) - v, eh[i], v, d);
                 small--;
             }
         }
+        // sum t_i rho |E_i| (in index order as well): exactly +0 when the energies are exact, then skipped.
+        double sumTA = 0;
+        for (int i = 0; levels.energiesInexact && i < n; i++) {
+            sumTA += factors[i] * (i == m ? 0 : errA[i]);
+        }
+        factors[m] = 1;
         b.terms(sumTE, sumTAbsD, sumTA, maxE, maxAll);
         double s = 1 + r;
         double mean = sumD / s;
 
-        // Pass 5: the moments about the mean and their error weights, in index order.
+        // Pass 5: q_i and the weight t_i (2 |q_i| + dq_i) dq_i of dq_i in C_V (dq_i changes q_i^2 by
+        // (2 |q_i| + dq_i) dq_i), element-wise; then the moments about the mean and their error
+        // weights, in index order.
+        final double[] qs = centred;
+        for (int i = 0; i < n; i++) {
+            qs[i] = ((en[i] - em) - mean) * beta;
+        }
+        for (int i = 0; i < n; i++) {
+            dqs[i] = factors[i] * (2 * Math.abs(qs[i]) + dqs[i]) * dqs[i];
+        }
         double variance = 0;
         double w0 = 0;
         double w1 = 0;
@@ -164,16 +192,15 @@ final class CanonicalKernel {
         double w3 = 0;
         for (int i = 0; i < n; i++) {
             double t = factors[i];
-            double q = ((en[i] - em) - mean) * beta;
+            double q = qs[i];
             double aq = Math.abs(q);
             double q2 = q * q;
             double e = eh[i];
-            double dq = dqs[i];
             variance += t * q2;
             w0 += t * aq;
             w1 += t * e * aq;
             w2 += t * e * q2;
-            w3 += t * (2 * aq + dq) * dq;
+            w3 += dqs[i];
         }
         variance /= s;
 

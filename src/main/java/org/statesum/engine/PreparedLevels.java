@@ -23,6 +23,8 @@ final class PreparedLevels {
     final double[] shiftedEnergies;
     final double[] logDegeneracies;
     final double[] energyErrorTerms;
+    /** Whether any energy carries an input error (rho > 0); when not, every energyErrorTerms[i] is 0. */
+    final boolean energiesInexact;
     final double[] logDegeneracyErrorTerms;
     final double groundEnergy;
     final double groundEnergyError;
@@ -52,6 +54,7 @@ final class PreparedLevels {
         groundEnergy = levels.energyKelvin(lowest);
         double relative = levels.energyRelativeError();
         groundEnergyError = relative * Math.abs(groundEnergy);
+        energiesInexact = relative != 0;
         double logErrorFactor = levels.logDegeneraciesExact() ? 0 : 2 * u;
         energies = new double[size];
         shiftedEnergies = new double[size];
