@@ -5,8 +5,8 @@ import java.math.MathContext;
 import java.math.RoundingMode;
 
 /**
- * Reference evaluations in 40-digit decimal arithmetic, independent of the production code: exp by
- * argument halving and a Taylor series, and the canonical moments of a level set summed term by term
+ * Reference evaluations in 40-digit decimal arithmetic, independent of the production code: exp and
+ * ln from {@link ExactMath}, and the canonical moments of a level set summed term by term
  * (the fluctuation formula {@code <E^2> - <E>^2}, safe here because every term carries 40 digits).
  */
 public final class HighPrecision {
@@ -16,34 +16,14 @@ public final class HighPrecision {
     private HighPrecision() {
     }
 
-    /** e^x for |x| up to a few thousand, to about 35 significant digits. */
+    /** e^x, from the 50-digit reference {@link ExactMath#exp}. */
     public static BigDecimal exp(BigDecimal x) {
-        int halvings = 0;
-        BigDecimal r = x;
-        while (r.abs().compareTo(BigDecimal.valueOf(0.01)) > 0) {
-            r = r.divide(BigDecimal.valueOf(2), MC);
-            halvings++;
-        }
-        BigDecimal sum = BigDecimal.ONE;
-        BigDecimal term = BigDecimal.ONE;
-        for (int n = 1; n < 40; n++) {
-            term = term.multiply(r, MC).divide(BigDecimal.valueOf(n), MC);
-            sum = sum.add(term, MC);
-        }
-        for (int i = 0; i < halvings; i++) {
-            sum = sum.multiply(sum, MC);
-        }
-        return sum;
+        return ExactMath.exp(x);
     }
 
-    /** ln a for a > 0, by Newton steps y <- y + 2 (a - e^y) / (a + e^y) from the double logarithm. */
+    /** ln a for a > 0, from the 50-digit reference {@link ExactMath#log}. */
     public static BigDecimal log(BigDecimal a) {
-        BigDecimal y = new BigDecimal(Math.log(a.doubleValue()));
-        for (int i = 0; i < 4; i++) {
-            BigDecimal ey = exp(y);
-            y = y.add(BigDecimal.valueOf(2).multiply(a.subtract(ey, MC), MC).divide(a.add(ey, MC), MC), MC);
-        }
-        return y;
+        return ExactMath.log(a);
     }
 
     /**

@@ -7,6 +7,7 @@ import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
 import org.junit.jupiter.api.Test;
+import org.statesum.testing.ExactMath;
 
 class ExponentialAveragingTest {
 
@@ -38,50 +39,9 @@ class ExponentialAveragingTest {
         BigDecimal sum = BigDecimal.ZERO;
         for (int i = from; i < to; i++) {
             BigDecimal w = new BigDecimal(uTo[i]).subtract(new BigDecimal(uFrom[i]), MC);
-            sum = sum.add(exp(w.negate()), MC);
+            sum = sum.add(ExactMath.exp(w.negate()), MC);
         }
         BigDecimal mean = sum.divide(BigDecimal.valueOf(to - from), MC);
-        return ln(mean).negate().doubleValue();
-    }
-
-    /** e^x by halving the argument below 1/2^10, a Taylor series, and squaring back. */
-    private static BigDecimal exp(BigDecimal x) {
-        int halvings = 0;
-        BigDecimal y = x;
-        while (y.abs().compareTo(new BigDecimal("0.0009765625")) > 0) {
-            y = y.divide(BigDecimal.valueOf(2), MC);
-            halvings++;
-        }
-        BigDecimal term = BigDecimal.ONE;
-        BigDecimal sum = BigDecimal.ONE;
-        for (int k = 1; k < 40; k++) {
-            term = term.multiply(y, MC).divide(BigDecimal.valueOf(k), MC);
-            sum = sum.add(term, MC);
-        }
-        for (int i = 0; i < halvings; i++) {
-            sum = sum.multiply(sum, MC);
-        }
-        return sum;
-    }
-
-    /** ln x by Newton's iteration on e^y = x from the binary64 guess (quadratic: 4 steps give 50 digits). */
-    private static BigDecimal ln(BigDecimal x) {
-        int scale = x.precision() - x.scale() - 1;
-        BigDecimal mantissa = x.movePointLeft(scale);
-        BigDecimal y = new BigDecimal(Math.log(mantissa.doubleValue()));
-        for (int i = 0; i < 6; i++) {
-            BigDecimal e = exp(y);
-            y = y.add(mantissa.subtract(e, MC).divide(e, MC), MC);
-        }
-        return y.add(new BigDecimal(scale).multiply(ln10(), MC), MC);
-    }
-
-    private static BigDecimal ln10() {
-        BigDecimal y = new BigDecimal(Math.log(10));
-        for (int i = 0; i < 6; i++) {
-            BigDecimal e = exp(y);
-            y = y.add(BigDecimal.TEN.subtract(e, MC).divide(e, MC), MC);
-        }
-        return y;
+        return ExactMath.log(mean).negate().doubleValue();
     }
 }
