@@ -28,6 +28,8 @@ import org.eclipse.jetty.ee10.servlet.FilterHolder;
 final class Operations {
 
     static final String METRICS_MEDIA_TYPE = "text/plain; version=0.0.4; charset=utf-8";
+    /** How long stopping waits for the access log's last lines to be written, ms. */
+    private static final long ACCESS_LOG_CLOSE_MILLIS = 1_000;
     private static final Key<ComputeRoutes> COMPUTE_ROUTES = new Key<>("statesum.compute-routes");
 
     private final ObjectMapper mapper;
@@ -98,6 +100,11 @@ final class Operations {
         javalin.events.serverStopped(() -> {
             workers.shutdownNow();
             accessLog.close();
+            try {
+                accessLog.awaitClosed(ACCESS_LOG_CLOSE_MILLIS); // the last lines, before the JVM exits
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+            }
         });
     }
 
