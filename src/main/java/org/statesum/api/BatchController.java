@@ -4,7 +4,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import io.javalin.http.Context;
 import java.io.IOException;
 import java.io.OutputStream;
-import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -66,7 +66,7 @@ final class BatchController {
             throws InterruptedException {
         AtomicBoolean gone = new AtomicBoolean();
         CompletionService<byte[]> done = new ExecutorCompletionService<>(workers);
-        List<Future<byte[]>> pending = new ArrayList<>();
+        Map<Future<byte[]>, BatchJob> pending = new HashMap<>();
         int next = 0;
         OutputStream out;
         try {
@@ -76,16 +76,24 @@ final class BatchController {
         }
         while (next < jobs.size() && pending.size() < ops.batchParallelism()) {
             BatchJob job = jobs.get(next++);
-            pending.add(done.submit(() -> line(job, ticket, deadline, gone)));
+            pending.put(done.submit(() -> line(job, ticket, deadline, gone)), job);
         }
         while (!pending.isEmpty()) {
             Future<byte[]> finished = done.take();
-            pending.remove(finished);
+            BatchJob finishedJob = pending.remove(finished);
             byte[] line;
             try {
                 line = finished.get();
-            } catch (ExecutionException | CancellationException e) {
-                continue; // only a job cancelled after the client left ends this way
+            } catch (CancellationException e) {
+                continue; // a job cancelled after the client left
+            } catch (ExecutionException e) {
+                if (e.getCause() instanceof CancellationException) {
+                    continue;
+                }
+                // an Error (out of memory, say) that escaped the job: its line still comes, as a 500
+                LOG.error("batch job failed unexpectedly", e.getCause());
+                metrics.batchJob("failed");
+                line = failureLine(finishedJob.id());
             }
             try {
                 out.write(line);
@@ -96,11 +104,11 @@ final class BatchController {
             }
             if (next < jobs.size()) {
                 BatchJob job = jobs.get(next++);
-                pending.add(done.submit(() -> line(job, ticket, deadline, gone)));
+                pending.put(done.submit(() -> line(job, ticket, deadline, gone)), job);
             }
         }
         if (gone.get()) {
-            pending.forEach(f -> f.cancel(true));
+            pending.keySet().forEach(f -> f.cancel(true));
             for (int i = next; i < jobs.size(); i++) {
                 metrics.batchJob("cancelled");
             }
@@ -152,12 +160,25 @@ final class BatchController {
             json = mapper.writeValueAsBytes(line);
         } catch (IOException e) {
             LOG.error("batch line could not be written", e);
-            Map<String, Object> failed = new LinkedHashMap<>();
-            failed.put("id", line.get("id"));
-            failed.put("status", 500);
-            failed.put("problem", ProblemMapper.fromStatus(500));
-            json = mapper.writeValueAsBytes(failed);
+            return failureLine((String) line.get("id"));
         }
+        return withNewline(json);
+    }
+
+    /** The line of a job that failed inside the service: its id, status 500 and a problem without details. */
+    private byte[] failureLine(String id) {
+        Map<String, Object> failed = new LinkedHashMap<>();
+        failed.put("id", id);
+        failed.put("status", 500);
+        failed.put("problem", ProblemMapper.fromStatus(500));
+        try {
+            return withNewline(mapper.writeValueAsBytes(failed));
+        } catch (IOException e) {
+            throw new IllegalStateException("a string and a problem are always writable", e);
+        }
+    }
+
+    private static byte[] withNewline(byte[] json) {
         byte[] withNewline = new byte[json.length + 1];
         System.arraycopy(json, 0, withNewline, 0, json.length);
         withNewline[json.length] = '\n';
