@@ -30,10 +30,6 @@ public final class App {
         byte[] openApi = resource(OPENAPI_RESOURCE);
         ProblemMapper problems = new ProblemMapper(mapper);
         Operations operations = new Operations(config, mapper, bodies, problems);
-        // The Allow header of a 405 on these paths (the compute routes register theirs below).
-        for (String path : new String[] {"/v1/constants", "/openapi.yaml", "/health/live", "/health/ready"}) {
-            problems.allow("GET", path);
-        }
         return Javalin.create(javalin -> {
             javalin.startup.showJavalinBanner = false;
             javalin.startup.showOldJavalinVersionWarning = false;
@@ -44,8 +40,8 @@ public final class App {
             // /v1/sampled is streamed rather than parsed into a tree: its matrices reach 1e7 numbers (see
             // SampledBodyParser); in a batch, where the job body is a tree already, it reads the tree.
             operations.install(javalin, compute, Map.of("/v1/sampled", ctx -> sampled.answer(bodies.openStreamed(ctx))));
-            javalin.routes.get("/v1/constants", constants::get);
-            javalin.routes.get("/openapi.yaml", ctx -> ctx.contentType("application/yaml").result(openApi));
+            ReadRoutes.add(javalin, problems, "/v1/constants", constants::get);
+            ReadRoutes.add(javalin, problems, "/openapi.yaml", ctx -> ctx.contentType("application/yaml").result(openApi));
         });
     }
 

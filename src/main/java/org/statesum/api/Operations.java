@@ -93,9 +93,9 @@ final class Operations {
         BatchController batch = new BatchController(mapper, bodies,
                 new BatchRequestReader(compute, ops.maxBatchJobs()), gate, runner, workers, metrics, ops);
         javalin.routes.post(problems.allow("POST", "/v1/batch"), batch::post);
-        javalin.routes.get(problems.allow("GET", "/metrics"), ctx -> ctx.contentType(METRICS_MEDIA_TYPE).result(metrics.scrape()));
-        javalin.routes.get("/health/live", lifecycle::live);
-        javalin.routes.get("/health/ready", lifecycle::ready);
+        ReadRoutes.add(javalin, problems, "/metrics", ctx -> ctx.contentType(METRICS_MEDIA_TYPE).result(metrics.scrape()));
+        ReadRoutes.add(javalin, problems, "/health/live", lifecycle::live);
+        ReadRoutes.add(javalin, problems, "/health/ready", lifecycle::ready);
         javalin.events.serverStopping(lifecycle::drain);
         javalin.events.serverStopped(() -> {
             workers.shutdownNow();

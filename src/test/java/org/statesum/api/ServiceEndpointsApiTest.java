@@ -7,6 +7,7 @@ import static org.hamcrest.Matchers.equalTo;
 import static org.hamcrest.Matchers.hasItems;
 import static org.hamcrest.Matchers.startsWith;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.nio.file.Files;
 import org.junit.jupiter.api.Test;
@@ -49,6 +50,22 @@ class ServiceEndpointsApiTest {
     }
 
     @Test
+    void headAnswersWhatGetWouldWithoutTheContent() {
+        for (String path : new String[] {"/v1/constants", "/openapi.yaml", "/health/live", "/health/ready", "/metrics"}) {
+            io.restassured.response.Response get = server.request().get(path);
+            io.restassured.response.Response head = server.request().head(path);
+            assertEquals(get.statusCode(), head.statusCode(), path);
+            assertEquals(get.contentType(), head.contentType(), path);
+            assertEquals("", head.asString(), path);
+            if (!path.equals("/metrics")) { // the meters move between the two requests
+                assertEquals(get.header("Content-Length"), head.header("Content-Length"), path);
+            }
+        }
+        // HEAD is not a way into a compute route (RFC 9110: HEAD answers as GET, which they do not serve)
+        server.request().head("/v1/spectrum").then().statusCode(405).header("Allow", "POST");
+    }
+
+    @Test
     void theContractIsServedAsWritten() throws Exception {
         byte[] served = server.request().get("/openapi.yaml").then().statusCode(200)
                 .contentType(startsWith("application/yaml")).extract().asByteArray();
@@ -70,7 +87,7 @@ class ServiceEndpointsApiTest {
                 .body("type", equalTo("https://statesum.org/problems/method-not-allowed"))
                 .body("status", equalTo(405));
         server.request().contentType("application/json").body("{}").post("/v1/constants").then().statusCode(405)
-                .header("Allow", "GET");
+                .header("Allow", "GET, HEAD");
         server.request().delete("/health/live").then().statusCode(405);
     }
 }
