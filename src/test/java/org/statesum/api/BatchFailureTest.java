@@ -36,6 +36,7 @@ class BatchFailureTest {
                 });
         app = Javalin.create(javalin -> {
             javalin.startup.showJavalinBanner = false;
+            javalin.jetty.port = 0;
             problems.register(javalin);
             operations.install(javalin, routes, Map.of());
         }).start();
