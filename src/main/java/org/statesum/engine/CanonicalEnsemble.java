@@ -33,6 +33,16 @@ public final class CanonicalEnsemble {
      * @throws DomainException TEMPERATURE_OUT_OF_RANGE naming the first bad temperature
      */
     public static CanonicalTable evaluate(LevelSet levels, double[] temperaturesKelvin, boolean withPopulations) {
+        checkTemperatures(temperaturesKelvin);
+        return prepare(levels).evaluate(temperaturesKelvin, withPopulations);
+    }
+
+    /** The level set prepared once for evaluation at many temperatures, one call after another. */
+    public static Prepared prepare(LevelSet levels) {
+        return new Prepared(new PreparedLevels(levels));
+    }
+
+    private static void checkTemperatures(double[] temperaturesKelvin) {
         for (int j = 0; j < temperaturesKelvin.length; j++) {
             double t = temperaturesKelvin[j];
             if (!(t == 0 || (t >= MIN_POSITIVE_TEMPERATURE_KELVIN && t <= MAX_TEMPERATURE_KELVIN))) {
@@ -41,25 +51,49 @@ public final class CanonicalEnsemble {
                                 + MAX_TEMPERATURE_KELVIN + " K");
             }
         }
-        PreparedLevels prepared = new PreparedLevels(levels);
-        int count = temperaturesKelvin.length;
-        CanonicalColumns out = new CanonicalColumns(count, prepared.size, withPopulations);
-        long pairs = (long) count * prepared.size;
-        int workers = pairs < PARALLEL_THRESHOLD_PAIRS ? 1
-                : Math.min(count, Runtime.getRuntime().availableProcessors());
-        Runnable stop = Cancellation.current();
-        if (workers <= 1) {
-            evaluateRange(prepared, temperaturesKelvin, 0, count, out, stop);
-        } else {
-            IntStream.range(0, workers).parallel().forEach(w -> evaluateRange(prepared, temperaturesKelvin,
-                    (int) ((long) count * w / workers), (int) ((long) count * (w + 1) / workers), out, stop));
-        }
-        return out.toTable(temperaturesKelvin);
     }
 
-    private static void evaluateRange(PreparedLevels prepared, double[] temperatures, int from, int to,
+    /**
+     * A level set prepared for repeated evaluation, e.g. by a search over temperature: the per-level
+     * work (shifts, logarithms, input-error terms) and the kernel's scratch arrays are made once
+     * instead of at every call. The answers are bit-identical to {@link CanonicalEnsemble#evaluate}.
+     * Not thread-safe: one call at a time (a call may still use several cores).
+     */
+    public static final class Prepared {
+
+        private final PreparedLevels levels;
+        /** The kernel of single-core calls, kept between them (its scratch is overwritten per temperature). */
+        private CanonicalKernel sequential;
+
+        private Prepared(PreparedLevels levels) {
+            this.levels = levels;
+        }
+
+        /** As {@link CanonicalEnsemble#evaluate}, for the prepared level set. */
+        public CanonicalTable evaluate(double[] temperaturesKelvin, boolean withPopulations) {
+            checkTemperatures(temperaturesKelvin);
+            int count = temperaturesKelvin.length;
+            CanonicalColumns out = new CanonicalColumns(count, levels.size, withPopulations);
+            long pairs = (long) count * levels.size;
+            int workers = pairs < PARALLEL_THRESHOLD_PAIRS ? 1
+                    : Math.min(count, Runtime.getRuntime().availableProcessors());
+            Runnable stop = Cancellation.current();
+            if (workers <= 1) {
+                if (sequential == null) {
+                    sequential = new CanonicalKernel(levels);
+                }
+                evaluateRange(sequential, temperaturesKelvin, 0, count, out, stop);
+            } else {
+                IntStream.range(0, workers).parallel().forEach(w -> evaluateRange(new CanonicalKernel(levels),
+                        temperaturesKelvin, (int) ((long) count * w / workers),
+                        (int) ((long) count * (w + 1) / workers), out, stop));
+            }
+            return out.toTable(temperaturesKelvin);
+        }
+    }
+
+    private static void evaluateRange(CanonicalKernel kernel, double[] temperatures, int from, int to,
             CanonicalColumns out, Runnable stop) {
-        CanonicalKernel kernel = new CanonicalKernel(prepared);
         for (int j = from; j < to; j++) {
             stop.run(); // a cooperative stop between temperatures (time limit, client gone); see Cancellation
             kernel.evaluate(temperatures[j], j, out);

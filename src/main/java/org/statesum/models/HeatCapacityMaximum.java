@@ -72,20 +72,21 @@ public record HeatCapacityMaximum(double temperatureKelvin, double temperatureTo
         if (!(peak > cv[order[best - 1]] && peak > cv[order[best + 1]]) || !(lo > 0 && lo < hi)) {
             return Optional.empty();
         }
-        UnivariateFunction heatCapacity = temperature -> evaluate(levels, particles, temperature).values()[0];
+        CanonicalEnsemble.Prepared prepared = CanonicalEnsemble.prepare(levels); // once for every trial
+        UnivariateFunction heatCapacity = temperature -> evaluate(prepared, particles, temperature).values()[0];
         BrentOptimizer brent = new BrentOptimizer(RELATIVE_TOLERANCE, ABSOLUTE_TOLERANCE_KELVIN);
         UnivariatePointValuePair max = brent.optimize(new MaxEval(MAX_EVALUATIONS),
                 new UnivariateObjectiveFunction(heatCapacity), GoalType.MAXIMIZE,
                 new SearchInterval(lo, hi, t[order[best]]));
-        Series at = evaluate(levels, particles, max.getPoint());
+        Series at = evaluate(prepared, particles, max.getPoint());
         double tolerance = 2 * (RELATIVE_TOLERANCE * Math.abs(max.getPoint()) + ABSOLUTE_TOLERANCE_KELVIN);
         return Optional.of(new HeatCapacityMaximum(max.getPoint(), tolerance, at.values()[0], at.errorBounds()[0],
                 brent.getEvaluations()));
     }
 
     /** C_V at one temperature, in J/K per entity of the basis, with its error bound. */
-    private static Series evaluate(LevelSet levels, Particles particles, double temperatureKelvin) {
-        CanonicalTable one = CanonicalEnsemble.evaluate(levels, new double[] {temperatureKelvin}, false);
+    private static Series evaluate(CanonicalEnsemble.Prepared levels, Particles particles, double temperatureKelvin) {
+        CanonicalTable one = levels.evaluate(new double[] {temperatureKelvin}, false);
         CanonicalTable table = CompositeSystem.of(one, particles.count(), particles.statistics(),
                 particles.perParticle());
         return table.heatCapacityOverBoltzmann().scaled(org.statesum.units.PhysicalConstants.BOLTZMANN_J_PER_K);

@@ -206,4 +206,24 @@ class ThermodynamicIdentityProperties {
             assertEquals(a.values()[j] + offset, b.values()[j], a.errorBounds()[j] + b.errorBounds()[j] + extra);
         }
     }
+
+    /** A prepared level set reused across calls (its kernel scratch overwritten) answers bit for bit as fresh ones. */
+    @Property(tries = 100)
+    void aPreparedLevelSetAnswersAsAFreshEvaluationCallAfterCall(@ForAll("levels") Levels levels,
+            @ForAll @DoubleRange(min = 0.01, max = 1e4) double t1, @ForAll @DoubleRange(min = 0.01, max = 1e4) double t2) {
+        CanonicalEnsemble.Prepared prepared = CanonicalEnsemble.prepare(levels.set());
+        for (double[] grid : new double[][] {{t1}, {t2, t1}, {0, t2}, {t1}}) {
+            CanonicalTable reused = prepared.evaluate(grid, true);
+            CanonicalTable fresh = CanonicalEnsemble.evaluate(levels.set(), grid, true);
+            for (Series[] pair : new Series[][] {
+                {reused.logPartitionFunction(), fresh.logPartitionFunction()},
+                {reused.helmholtzEnergyKelvin(), fresh.helmholtzEnergyKelvin()},
+                {reused.internalEnergyKelvin(), fresh.internalEnergyKelvin()},
+                {reused.entropyOverBoltzmann(), fresh.entropyOverBoltzmann()},
+                {reused.heatCapacityOverBoltzmann(), fresh.heatCapacityOverBoltzmann()}}) {
+                assertArrayEquals(pair[1].values(), pair[0].values());
+                assertArrayEquals(pair[1].errorBounds(), pair[0].errorBounds());
+            }
+        }
+    }
 }
