@@ -41,6 +41,9 @@ final class BodyReader {
     private final Limit treeLimit;
     /** For bodies parsed incrementally into arrays (/v1/sampled). */
     private final Limit streamLimit;
+    /** The grace before a body's pace is checked, and the slowest pace allowed after it (0: none). */
+    private final long bodyTimeoutMillis;
+    private final long minBodyBytesPerSecond;
 
     /** A size limit and the variable that sets it, for the 413 message. */
     private record Limit(long bytes, String variable) {
@@ -50,6 +53,8 @@ final class BodyReader {
         this.mapper = mapper;
         this.treeLimit = new Limit(config.maxBodyBytes(), ServiceConfig.PREFIX + "MAX_BODY_BYTES");
         this.streamLimit = new Limit(config.maxStreamedBodyBytes(), ServiceConfig.PREFIX + "MAX_STREAMED_BODY_BYTES");
+        this.bodyTimeoutMillis = config.operations().bodyTimeoutMillis();
+        this.minBodyBytesPerSecond = config.operations().minBodyBytesPerSecond();
     }
 
     JsonNode read(Context ctx) {
@@ -83,7 +88,7 @@ final class BodyReader {
         long maxBodyBytes = limit.bytes();
         requireJson(ctx.contentType());
         try {
-            InputStream raw = ctx.req().getInputStream();
+            InputStream raw = paced(ctx.req().getInputStream());
             long declared = ctx.contentLength();
             if (declared > maxBodyBytes) {
                 // A client that waits for "100 Continue" has sent nothing; one that did not is sending
@@ -112,8 +117,32 @@ final class BodyReader {
         }
     }
 
-    /** The 400 problem for a body the parser rejected or that could not be read. */
+    /** The body stream held to the minimum pace, when one is set. */
+    private InputStream paced(InputStream raw) {
+        if (minBodyBytesPerSecond <= 0) {
+            return raw;
+        }
+        return new PacedInputStream(raw, bodyTimeoutMillis * 1_000_000L, minBodyBytesPerSecond, System::nanoTime,
+                () -> tooSlow("the request body arrived at less than " + minBodyBytesPerSecond
+                        + " bytes/s after " + bodyTimeoutMillis + " ms (" + ServiceConfig.PREFIX
+                        + "MIN_BODY_BYTES_PER_SECOND)"));
+    }
+
+    /** The 408 of a body that stalled or arrived too slowly (RFC 9110, section 15.5.9). */
+    static ProblemException tooSlow(String detail) {
+        return new ProblemException(Problem.of("request-timeout", "Request body too slow", 408, detail,
+                List.of(new FieldError("", detail))));
+    }
+
+    /** The 400 problem for a body the parser rejected or that could not be read (408 if it stalled). */
     static ProblemException unreadable(IOException failure) {
+        for (Throwable cause = failure; cause != null; cause = cause.getCause()) {
+            if (cause instanceof java.util.concurrent.TimeoutException) {
+                // Jetty's idle timeout for blocking reads (Operations sets it to STATESUM_BODY_TIMEOUT_MS)
+                return tooSlow("no byte of the request body arrived for the body timeout ("
+                        + ServiceConfig.PREFIX + "BODY_TIMEOUT_MS)");
+            }
+        }
         if (failure instanceof StreamConstraintsException e) {
             return ProblemException.unreadable("the body exceeds a parser limit: " + limitName(e), pointerOf(e));
         }
@@ -172,8 +201,8 @@ final class BodyReader {
             for (int n; left > 0 && (n = in.read(sink, 0, (int) Math.min(sink.length, left))) > 0; ) {
                 left -= n;
             }
-        } catch (IOException e) {
-            // the client went away; nothing more to drop
+        } catch (IOException | ProblemException e) {
+            // the client went away or sends too slowly; nothing more to drop
         }
     }
 

@@ -65,6 +65,9 @@ final class Operations {
      */
     void install(JavalinConfig javalin, ComputeRoutes compute, Map<String, StreamedEndpoint> streamed) {
         javalin.appData(COMPUTE_ROUTES, compute);
+        // A blocking read of a request body that sees no byte for this long fails (408, see BodyReader);
+        // the connector's own idle timeout still governs idle keep-alive connections.
+        javalin.jetty.modifyHttpConfiguration(http -> http.setIdleTimeout(ops.bodyTimeoutMillis()));
         javalin.events.handlerAdded(handler -> {
             if (!handler.getPath().contains("*") && !handler.getPath().contains("{")) {
                 routes.add(handler.getPath());

@@ -34,6 +34,10 @@ import java.util.Map;
  * @param corsOrigins browser origins allowed to call the service, or {@code *}; none means no CORS
  *        ({@code CORS_ORIGINS}, comma-separated)
  * @param accessLog whether to write one log line per request ({@code ACCESS_LOG}, true)
+ * @param bodyTimeoutMillis longest wait for the next byte of a request body, and the grace before
+ *        its pace is checked ({@code BODY_TIMEOUT_MS}, 10 000)
+ * @param minBodyBytesPerSecond the slowest average pace a body may arrive at once the grace is over,
+ *        0 for no check ({@code MIN_BODY_BYTES_PER_SECOND}, 16 384)
  */
 public record OperationsConfig(
         int maxConcurrentJobs,
@@ -47,7 +51,9 @@ public record OperationsConfig(
         long shutdownGraceMillis,
         BearerTokens tokens,
         List<String> corsOrigins,
-        boolean accessLog) {
+        boolean accessLog,
+        long bodyTimeoutMillis,
+        long minBodyBytesPerSecond) {
 
     public OperationsConfig {
         corsOrigins = List.copyOf(corsOrigins);
@@ -57,35 +63,42 @@ public record OperationsConfig(
     public static OperationsConfig defaults() {
         int cores = Runtime.getRuntime().availableProcessors();
         return new OperationsConfig(cores, 32, 2_000, 30_000, 1, 10_000, cores, 600_000, 20_000,
-                BearerTokens.none(), List.of(), true);
+                BearerTokens.none(), List.of(), true, 10_000, 16_384);
     }
 
     /** A copy with other concurrency limits (tests and benchmarks). */
     public OperationsConfig withConcurrency(int jobs, int queued, long queueWait) {
         return new OperationsConfig(jobs, queued, queueWait, timeLimitMillis, retryAfterSeconds, maxBatchJobs,
                 Math.min(batchParallelism, jobs), batchTimeLimitMillis, shutdownGraceMillis, tokens, corsOrigins,
-                accessLog);
+                accessLog, bodyTimeoutMillis, minBodyBytesPerSecond);
     }
 
     /** A copy with another job time limit. */
     public OperationsConfig withTimeLimit(long millis) {
         return new OperationsConfig(maxConcurrentJobs, maxQueuedRequests, queueWaitMillis, millis,
                 retryAfterSeconds, maxBatchJobs, batchParallelism, batchTimeLimitMillis, shutdownGraceMillis, tokens,
-                corsOrigins, accessLog);
+                corsOrigins, accessLog, bodyTimeoutMillis, minBodyBytesPerSecond);
     }
 
     /** A copy with other access rules. */
     public OperationsConfig withAccess(BearerTokens newTokens, List<String> origins) {
         return new OperationsConfig(maxConcurrentJobs, maxQueuedRequests, queueWaitMillis, timeLimitMillis,
                 retryAfterSeconds, maxBatchJobs, batchParallelism, batchTimeLimitMillis, shutdownGraceMillis,
-                newTokens, origins, accessLog);
+                newTokens, origins, accessLog, bodyTimeoutMillis, minBodyBytesPerSecond);
     }
 
     /** A copy with another batch parallelism. */
     public OperationsConfig withBatchParallelism(int parallelism) {
         return new OperationsConfig(maxConcurrentJobs, maxQueuedRequests, queueWaitMillis, timeLimitMillis,
                 retryAfterSeconds, maxBatchJobs, parallelism, batchTimeLimitMillis, shutdownGraceMillis, tokens,
-                corsOrigins, accessLog);
+                corsOrigins, accessLog, bodyTimeoutMillis, minBodyBytesPerSecond);
+    }
+
+    /** A copy with another pace for request bodies. */
+    public OperationsConfig withBodyPace(long timeoutMillis, long bytesPerSecond) {
+        return new OperationsConfig(maxConcurrentJobs, maxQueuedRequests, queueWaitMillis, timeLimitMillis,
+                retryAfterSeconds, maxBatchJobs, batchParallelism, batchTimeLimitMillis, shutdownGraceMillis, tokens,
+                corsOrigins, accessLog, timeoutMillis, bytesPerSecond);
     }
 
     /** Reads the settings, adding a sentence to {@code problems} for every bad variable. */
@@ -105,7 +118,9 @@ public record OperationsConfig(
                 ServiceConfig.read(env, "SHUTDOWN_GRACE_MS", d.shutdownGraceMillis, 0, 3_600_000, problems),
                 tokens(env, problems),
                 list(env.get(ServiceConfig.PREFIX + "CORS_ORIGINS")),
-                !"false".equalsIgnoreCase(String.valueOf(env.get(ServiceConfig.PREFIX + "ACCESS_LOG")).trim()));
+                !"false".equalsIgnoreCase(String.valueOf(env.get(ServiceConfig.PREFIX + "ACCESS_LOG")).trim()),
+                ServiceConfig.read(env, "BODY_TIMEOUT_MS", d.bodyTimeoutMillis, 100, 3_600_000, problems),
+                ServiceConfig.read(env, "MIN_BODY_BYTES_PER_SECOND", d.minBodyBytesPerSecond, 0, 1L << 40, problems));
     }
 
     private static BearerTokens tokens(Map<String, String> env, List<String> problems) {

@@ -45,6 +45,20 @@ class ServiceConfigTest {
     }
 
     @Test
+    void theBodyPaceIsReadAndCheckedLikeEveryOtherLimit() {
+        OperationsConfig ops = ServiceConfig.fromEnvironment(Map.of("STATESUM_BODY_TIMEOUT_MS", "2500",
+                "STATESUM_MIN_BODY_BYTES_PER_SECOND", "0")).operations();
+        assertEquals(2_500, ops.bodyTimeoutMillis());
+        assertEquals(0, ops.minBodyBytesPerSecond());
+        assertEquals(10_000, OperationsConfig.defaults().bodyTimeoutMillis());
+        assertEquals(16_384, OperationsConfig.defaults().minBodyBytesPerSecond());
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> ServiceConfig.fromEnvironment(
+                Map.of("STATESUM_BODY_TIMEOUT_MS", "0", "STATESUM_MIN_BODY_BYTES_PER_SECOND", "-5")));
+        assertTrue(e.getMessage().contains("STATESUM_BODY_TIMEOUT_MS"), e.getMessage());
+        assertTrue(e.getMessage().contains("STATESUM_MIN_BODY_BYTES_PER_SECOND"), e.getMessage());
+    }
+
+    @Test
     void badValuesAreRejectedNamingEveryBadVariable() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () ->
                 ServiceConfig.fromEnvironment(Map.of(
