@@ -1,32 +1,48 @@
 package org.statesum.models.gas;
 
+import org.statesum.engine.HarmonicModes;
 import org.statesum.units.PhysicalConstants;
 
 /**
  * Harmonic vibrations (with the low-frequency treatment of {@link LowFrequency}), mode i with
  * theta_i = h c nu_i / k_B and x = theta_i / T:
  * U_i / k_B = theta_i / 2 + theta_i / (e^x - 1), S_i / k_B = x / (e^x - 1) - ln(1 - e^-x),
- * C_V,i / k_B = (x / (2 sinh(x / 2)))^2 (McQuarrie, Statistical Mechanics, 1976, ch. 8), with expm1
- * and log1p so that neither very low nor very high x loses digits. Energies include the zero-point
- * energy sum theta_i / 2.
+ * C_V,i / k_B = x^2 e^x / (e^x - 1)^2 (McQuarrie, Statistical Mechanics, 1976, ch. 8). Energies
+ * include the zero-point energy sum theta_i / 2.
  *
- * <p>Accuracy: each term to (10 + 3 (x + 1)) u relative (u = 2^-53), the 3 (x + 1) covering the
- * relative rounding of theta and of x, amplified by x in e^-x; the sum adds n u times the sum of |terms|.
+ * <p>The oscillators themselves are {@link HarmonicModes}, the same code and error analysis as the
+ * crystals' modes: all modes at once when nothing is interpolated; mode by mode when a low-frequency
+ * interpolation weights each one differently, the mixing adding its own rounding to the bounds.
  */
 public final class Vibrations {
 
     /** h c / k_B in K cm (the second radiation constant c_2 = 1.438776877 cm K, exact in the 2019 SI). */
     public static final double KELVIN_PER_WAVENUMBER = PhysicalConstants.PLANCK_J_S
             * PhysicalConstants.SPEED_OF_LIGHT_M_PER_S * 100 / PhysicalConstants.BOLTZMANN_J_PER_K;
+    /** Relative error of theta = nu c_2: c_2 from three roundings, and the product one more. */
+    private static final double THETA_RELATIVE_ERROR = 4 * GasPart.U;
 
     private final double[] wavenumbers;
     private final LowFrequency lowFrequency;
     private final int raised;
+    /** Every mode with weight 1, for the plain harmonic case. */
+    private final HarmonicModes all;
+    /** Each mode on its own, for the interpolated case. */
+    private final HarmonicModes[] single;
 
     private Vibrations(double[] wavenumbers, LowFrequency lowFrequency, int raised) {
         this.wavenumbers = wavenumbers;
         this.lowFrequency = lowFrequency;
         this.raised = raised;
+        double[] theta = new double[wavenumbers.length];
+        double[] ones = new double[wavenumbers.length];
+        this.single = new HarmonicModes[wavenumbers.length];
+        for (int i = 0; i < theta.length; i++) {
+            theta[i] = wavenumbers[i] * KELVIN_PER_WAVENUMBER;
+            ones[i] = 1;
+            single[i] = HarmonicModes.of(new double[] {theta[i]}, new double[] {1}, THETA_RELATIVE_ERROR);
+        }
+        this.all = HarmonicModes.of(theta, ones, THETA_RELATIVE_ERROR);
     }
 
     /**
@@ -60,23 +76,39 @@ public final class Vibrations {
 
     /** The harmonic zero-point energy sum theta_i / 2, K, with its bound. */
     public double[] zeroPointEnergyKelvin() {
-        double sum = 0;
-        for (double nu : wavenumbers) {
-            sum += 0.5 * nu * KELVIN_PER_WAVENUMBER;
-        }
-        return new double[] {sum, (wavenumbers.length + 3) * GasPart.U * sum};
+        double[] out = new double[8];
+        all.evaluateAt(0, out); // at T = 0, U is the zero-point energy and out[5] its bound
+        return new double[] {out[1], out[5]};
     }
 
     /** The part at every temperature (each T > 0). */
     public GasPart evaluate(double[] temperaturesKelvin) {
         GasPart part = GasPart.zero(temperaturesKelvin.length);
+        boolean interpolated = lowFrequency.freeRotorEntropy() || lowFrequency.freeRotorEnergy();
+        double[] out = new double[8];
         for (int j = 0; j < temperaturesKelvin.length; j++) {
-            evaluateAt(temperaturesKelvin[j], j, part);
+            if (interpolated) {
+                evaluateInterpolated(temperaturesKelvin[j], j, part, out);
+            } else {
+                all.evaluateAt(temperaturesKelvin[j], out);
+                set(part, j, out[1], out[5], out[2], out[6], out[3], out[7]);
+            }
         }
         return part;
     }
 
-    private void evaluateAt(double t, int j, GasPart part) {
+    private static void set(GasPart part, int j, double u, double uBound, double s, double sBound, double c,
+            double cBound) {
+        part.internalEnergyKelvin().values()[j] = u;
+        part.internalEnergyKelvin().errorBounds()[j] = uBound;
+        part.entropy().values()[j] = s;
+        part.entropy().errorBounds()[j] = sBound;
+        part.heatCapacity().values()[j] = c;
+        part.heatCapacity().errorBounds()[j] = cBound;
+    }
+
+    /** Mode by mode: the harmonic values, mixed with the free rotor's by the damping weight, then summed. */
+    private void evaluateInterpolated(double t, int j, GasPart part, double[] out) {
         double u = GasPart.U;
         double sumU = 0;
         double sumS = 0;
@@ -87,27 +119,17 @@ public final class Vibrations {
         double bU = 0;
         double bS = 0;
         double bC = 0;
-        for (double nu : wavenumbers) {
-            double theta = nu * KELVIN_PER_WAVENUMBER;
-            double x = theta / t;
-            double rel = (10 + 3 * (x + 1)) * u;
-            double em = Math.expm1(x);
-            double thermal = theta / em;
-            double energy = theta / 2 + thermal;
-            double logTerm = logOneMinusExpMinus(x);
-            double entropy = x / em - logTerm;
-            double half = x / (2 * Math.sinh(x / 2));
-            double heat = half * half;
-            // theta / 2 carries only the rounding of theta; the thermal part the x-amplified one.
-            double eBound = 4 * u * theta / 2 + rel * thermal + 2 * u * energy;
-            // ln(1 - e^-x) to 2 u + u |ln| absolute for x < ln 2 (a relative error d of x moves it by
-            // x d / (e^x - 1) <= d), and to (x + 2) u |e^-x| times 2 above: covered by rel |ln| (plus 8 u below ln 2).
-            double sBound = rel * (x / em + Math.abs(logTerm)) + (x < LN2 ? 8 * u : 0);
-            double cBound = rel * heat;
-            boolean interpolate = lowFrequency.freeRotorEntropy() || lowFrequency.freeRotorEnergy();
-            double w = interpolate ? lowFrequency.weight(nu) : 1;
+        for (int i = 0; i < wavenumbers.length; i++) {
+            single[i].evaluateAt(t, out);
+            double energy = out[1];
+            double entropy = out[2];
+            double heat = out[3];
+            double eBound = out[5];
+            double sBound = out[6];
+            double cBound = out[7];
+            double w = lowFrequency.weight(wavenumbers[i]);
             if (lowFrequency.freeRotorEntropy()) {
-                double[] free = freeRotorEntropy(nu, t);
+                double[] free = freeRotorEntropy(wavenumbers[i], t);
                 entropy = w * entropy + (1 - w) * free[0];
                 sBound = w * sBound + (1 - w) * free[1] + 8 * u * (Math.abs(entropy) + Math.abs(free[0]));
             }
@@ -128,23 +150,8 @@ public final class Vibrations {
             bC += cBound;
         }
         int n = wavenumbers.length;
-        part.internalEnergyKelvin().values()[j] = sumU;
-        part.internalEnergyKelvin().errorBounds()[j] = bU + n * u * absU;
-        part.entropy().values()[j] = sumS;
-        part.entropy().errorBounds()[j] = bS + n * u * absS;
-        part.heatCapacity().values()[j] = sumC;
-        part.heatCapacity().errorBounds()[j] = bC + n * u * absC;
+        set(part, j, sumU, bU + n * u * absU, sumS, bS + n * u * absS, sumC, bC + n * u * absC);
     }
-
-    /**
-     * ln(1 - e^-x) for x > 0 without cancellation: ln(-expm1(-x)) for x < ln 2, log1p(-e^-x) above
-     * (M. Maechler, "Accurately computing log(1 - exp(-|a|))", R package Rmpfr vignette, 2012).
-     */
-    static double logOneMinusExpMinus(double x) {
-        return x < LN2 ? Math.log(-Math.expm1(-x)) : Math.log1p(-Math.exp(-x));
-    }
-
-    private static final double LN2 = Math.log(2);
 
     /** S_FR / k_B of Grimme's free rotor for wavenumber nu (cm^-1) at T, and its bound. */
     private double[] freeRotorEntropy(double nu, double t) {
