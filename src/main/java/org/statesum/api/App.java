@@ -37,6 +37,8 @@ public final class App {
             javalin.http.maxRequestSize = config.maxBodyBytes();
             javalin.http.prefer405over404 = true;
             problems.register(javalin);
+            // errors Jetty answers itself, before any route (bad request line, oversized headers)
+            javalin.jetty.modifyServer(server -> server.setErrorHandler(new ProtocolErrors(mapper)));
             // /v1/sampled is streamed rather than parsed into a tree: its matrices reach 1e7 numbers (see
             // SampledBodyParser); in a batch, where the job body is a tree already, it reads the tree.
             operations.install(javalin, compute, Map.of("/v1/sampled", ctx -> sampled.answer(bodies.openStreamed(ctx))));
