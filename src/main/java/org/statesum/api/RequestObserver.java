@@ -26,6 +26,12 @@ final class RequestObserver implements Filter {
     static final String REQUEST_ID = "X-Request-Id";
     private static final char[] HEX = "0123456789abcdef".toCharArray();
     private static final Pattern SAFE_ID = Pattern.compile("[A-Za-z0-9._:-]{1,128}");
+    /**
+     * The methods of RFC 9110 and PATCH (RFC 5789); any other token a client sends is measured and logged
+     * as {@code other}, so that made-up methods cannot grow the meter set without bound.
+     */
+    private static final Set<String> METHODS = Set.of("GET", "HEAD", "POST", "PUT", "DELETE", "CONNECT", "OPTIONS",
+            "TRACE", "PATCH");
 
     private final ServiceMetrics metrics;
     private final Set<String> routes;
@@ -72,9 +78,10 @@ final class RequestObserver implements Filter {
         String path = req.getRequestURI();
         String route = routes.contains(path) ? path : "unmatched";
         int status = res.getStatus();
-        metrics.request(req.getMethod(), route, status, nanos);
+        String method = METHODS.contains(req.getMethod()) ? req.getMethod() : "other";
+        metrics.request(method, route, status, nanos);
         if (accessLog.enabled()) {
-            accessLog.add(line(id, req.getMethod(), path, status, nanos, req.getContentLengthLong(), req.getRemoteAddr()));
+            accessLog.add(line(id, method, path, status, nanos, req.getContentLengthLong(), req.getRemoteAddr()));
         }
     }
 
