@@ -113,19 +113,33 @@ final class Operations {
 
     /**
      * One compute request: admitted or 503, body read (at most running + queued bodies are in memory),
-     * a compute slot or 503, computed under the time limit and serialized while the slot is held (a
-     * large answer is CPU work too), then written. A streamed endpoint reads as it computes, so its
+     * a compute slot or 503, computed under the time limit and serialized (and gzipped, for a large
+     * answer to a client that accepts it) while the slot is held (a large answer is CPU work too), then
+     * written. A streamed endpoint reads as it computes, so its
      * reading happens inside the slot.
      */
     private void direct(Context ctx, String path, Function<Context, Supplier<Object>> prepare) throws IOException {
         try (ComputeGate.Ticket ticket = gate.admit()) {
             Supplier<Object> work = prepare.apply(ctx);
             byte[] json;
+            boolean large;
+            boolean gzip;
             try (ComputeGate.Slot slot = ticket.slotOrRefuse()) {
                 json = mapper.writeValueAsBytes(runner.run(path, work, JobRunner.noOuterDeadline(), () -> false));
+                large = json.length >= AnswerEncoding.MIN_BYTES;
+                gzip = large && AnswerEncoding.acceptsGzip(ctx.header("Accept-Encoding"));
+                if (gzip) {
+                    json = AnswerEncoding.gzip(json);
+                }
             }
             // written straight to the response: no copy through Javalin's result stream
             ctx.status(200).contentType("application/json");
+            if (large) {
+                ctx.res().setHeader("Vary", "Accept-Encoding");
+            }
+            if (gzip) {
+                ctx.res().setHeader("Content-Encoding", "gzip");
+            }
             ctx.res().setContentLength(json.length);
             ctx.res().getOutputStream().write(json);
         }
