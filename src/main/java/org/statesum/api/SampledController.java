@@ -27,7 +27,7 @@ final class SampledController implements ComputeEndpoint {
         try (JsonParser parser = body.traverse(mapper)) {
             return answer(parser);
         } catch (IOException e) {
-            throw BodyReader.unreadable(e);
+            throw BodyProblems.unreadable(e);
         }
     }
 
@@ -36,7 +36,7 @@ final class SampledController implements ComputeEndpoint {
         try (InputStream in = body; JsonParser parser = mapper.createParser(in)) {
             return answer(parser);
         } catch (IOException e) {
-            throw BodyReader.unreadable(e);
+            throw BodyProblems.unreadable(e);
         }
     }
 

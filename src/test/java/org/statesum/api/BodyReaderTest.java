@@ -23,13 +23,13 @@ class BodyReaderTest {
         "Duplicate field 'levels' | Duplicate field 'levels'",
         "'' | syntax error"})
     void cleanKeepsWhatHelpsAndDropsInternals(String message, String expected) {
-        String cleaned = BodyReader.clean(message.replace("\\n", "\n"));
+        String cleaned = BodyProblems.clean(message.replace("\\n", "\n"));
         assertEquals(expected, cleaned);
         assertFalse(BadRequestApiTest.INTERNALS.matcher(cleaned).find(), cleaned);
     }
 
     @org.junit.jupiter.api.Test
     void aMissingMessageIsASyntaxError() {
-        assertEquals("syntax error", BodyReader.clean(null));
+        assertEquals("syntax error", BodyProblems.clean(null));
     }
 }
