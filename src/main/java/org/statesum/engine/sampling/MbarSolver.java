@@ -2,12 +2,6 @@ package org.statesum.engine.sampling;
 
 import java.util.List;
 import java.util.Map;
-import java.util.stream.IntStream;
-import org.apache.commons.math3.exception.MathIllegalArgumentException;
-import org.apache.commons.math3.linear.Array2DRowRealMatrix;
-import org.apache.commons.math3.linear.ArrayRealVector;
-import org.apache.commons.math3.linear.CholeskyDecomposition;
-import org.statesum.engine.Cancellation;
 
 /**
  * Solves the MBAR equations (see {@link Mbar}) and gathers M = W^T W for the covariance. The
@@ -29,8 +23,6 @@ final class MbarSolver {
     static final int MAX_PASSES = 200;
     /** Step halvings before a Newton step is abandoned for a self-consistent one. */
     static final int MAX_HALVINGS = 30;
-    /** Objective increase tolerated as rounding, relative to the magnitude of its terms. */
-    static final double OBJECTIVE_SLACK = 1e-12;
 
     private MbarSolver() {
     }
@@ -70,7 +62,7 @@ final class MbarSolver {
         boolean curIsLast = true;
         double residual = residual(cur.s());
         while (residual > TOLERANCE && passes < MAX_PASSES) {
-            double[] step = newton ? newtonStep(cur, countsD) : null;
+            double[] step = newton ? MbarNewton.step(cur, countsD) : null;
             if (step != null) {
                 newtonIterations++;
                 double t = 1;
@@ -82,7 +74,7 @@ final class MbarSolver {
                     }
                     MbarPass.Sums next = pass.run(trial, countsD, true, logD);
                     passes++;
-                    if (next.objective() <= cur.objective() + slack(cur, f, countsD, n)) {
+                    if (next.objective() <= cur.objective() + MbarNewton.slack(cur, f, countsD, n)) {
                         f = trial;
                         cur = next;
                         accepted = true;
@@ -113,7 +105,7 @@ final class MbarSolver {
                 passes++;
             }
             for (int i = 0; i < ks; i++) {
-                next[i] = representable ? f[i] - Math.log(cur.s()[i]) : -logSumExp(rows[i], logD);
+                next[i] = representable ? f[i] - Math.log(cur.s()[i]) : -MbarWeights.logSumExp(rows[i], logD);
             }
             for (int i = ks - 1; i >= 0; i--) {
                 next[i] -= next[0];
@@ -133,7 +125,7 @@ final class MbarSolver {
             passes++;
             residual = residual(cur.s());
         }
-        double[] finalStep = ks > 1 ? newtonStep(cur, countsD) : new double[ks];
+        double[] finalStep = ks > 1 ? MbarNewton.step(cur, countsD) : new double[ks];
         double u = LogSpace.UNIT_ROUNDOFF;
         double[] all = new double[kAll];
         double[] bounds = new double[kAll];
@@ -148,11 +140,11 @@ final class MbarSolver {
         if (unsampled) {
             for (int s = 0; s < kAll; s++) {
                 if (data.counts()[s] == 0) {
-                    all[s] = -logSumExp(data.u()[s], logD);
+                    all[s] = -MbarWeights.logSumExp(data.u()[s], logD);
                     bounds[s] = worstSampled + 2 * u * (n + 2 * Math.abs(all[s]) + 4);
                 }
             }
-            m = weightProducts(data.u(), all, logD);
+            m = MbarWeights.products(data.u(), all, logD);
         } else {
             m = new double[kAll][kAll];
             for (int i = 0; i < ks; i++) {
@@ -172,97 +164,5 @@ final class MbarSolver {
             r = Math.max(r, Math.abs(v - 1));
         }
         return Double.isNaN(r) ? Double.POSITIVE_INFINITY : r;
-    }
-
-    private static double slack(MbarPass.Sums cur, double[] f, double[] counts, int n) {
-        double scale = Math.abs(cur.objective()) + n;
-        for (int i = 0; i < f.length; i++) {
-            scale += counts[i] * Math.abs(f[i]);
-        }
-        return OBJECTIVE_SLACK * scale;
-    }
-
-    /** The Newton step with the first state fixed, or null when the Hessian is not positive definite. */
-    static double[] newtonStep(MbarPass.Sums cur, double[] counts) {
-        int ks = counts.length;
-        if (ks == 1) {
-            return new double[1];
-        }
-        int r = ks - 1;
-        double[][] h = new double[r][r];
-        double[] g = new double[r];
-        for (int i = 0; i < r; i++) {
-            g[i] = -counts[i + 1] * (cur.s()[i + 1] - 1);
-            for (int j = 0; j < r; j++) {
-                h[i][j] = (i == j ? counts[i + 1] * cur.s()[i + 1] : 0) - cur.p()[i + 1][j + 1];
-            }
-        }
-        try {
-            double[] d = new CholeskyDecomposition(new Array2DRowRealMatrix(h, false), 1e-10, 1e-14)
-                    .getSolver().solve(new ArrayRealVector(g, false)).toArray();
-            double[] step = new double[ks];
-            System.arraycopy(d, 0, step, 1, r);
-            for (double v : step) {
-                if (!Double.isFinite(v)) {
-                    return null;
-                }
-            }
-            return step;
-        } catch (MathIllegalArgumentException e) {
-            return null;
-        }
-    }
-
-    /** -f_k = ln sum_n exp(-u_kn - ln D_n), in blocks added in order. */
-    private static double logSumExp(double[] row, double[] logD) {
-        int n = row.length;
-        double max = Double.NEGATIVE_INFINITY;
-        for (int i = 0; i < n; i++) {
-            max = Math.max(max, -row[i] - logD[i]);
-        }
-        double sum = 0;
-        for (int i = 0; i < n; i++) {
-            sum += Math.exp(-row[i] - logD[i] - max);
-        }
-        return max + Math.log(sum);
-    }
-
-    /** M_ij = sum_n W_in W_jn over all states, W_kn = exp(f_k - u_kn - ln D_n), blocks in parallel. */
-    private static double[][] weightProducts(double[][] u, double[] f, double[] logD) {
-        int k = u.length;
-        int n = logD.length;
-        int blocks = (n + MbarPass.BLOCK - 1) / MbarPass.BLOCK;
-        double[][][] partial = new double[blocks][][];
-        Runnable stop = Cancellation.current();
-        IntStream.range(0, blocks).parallel().forEach(b -> {
-            stop.run(); // a cooperative stop between blocks of samples; see Cancellation
-            double[][] m = new double[k][k];
-            double[] w = new double[k];
-            for (int s = b * MbarPass.BLOCK; s < Math.min(n, (b + 1) * MbarPass.BLOCK); s++) {
-                for (int i = 0; i < k; i++) {
-                    w[i] = Math.exp(f[i] - u[i][s] - logD[s]);
-                }
-                for (int i = 0; i < k; i++) {
-                    for (int j = 0; j <= i; j++) {
-                        m[i][j] += w[i] * w[j];
-                    }
-                }
-            }
-            partial[b] = m;
-        });
-        double[][] m = new double[k][k];
-        for (double[][] part : partial) {
-            for (int i = 0; i < k; i++) {
-                for (int j = 0; j <= i; j++) {
-                    m[i][j] += part[i][j];
-                }
-            }
-        }
-        for (int i = 0; i < k; i++) {
-            for (int j = 0; j < i; j++) {
-                m[j][i] = m[i][j];
-            }
-        }
-        return m;
     }
 }
