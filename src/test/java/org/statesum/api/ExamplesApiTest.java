@@ -34,4 +34,30 @@ class ExamplesApiTest {
                 .body("entropy.unit", equalTo("J/(mol K)"))
                 .body("entropy.values[0]", closeTo(8.314462618 * Math.log(2), 1e-8));
     }
+
+    /**
+     * The README's table for the blowing-agent scenario (invented molecules, demo values): the examples
+     * must keep answering what the README says, to the digits it prints.
+     */
+    @ParameterizedTest
+    @org.junit.jupiter.params.provider.CsvSource({
+        "decomposition-kestrel-a.json, 8.30, -6.22, 357.148",
+        "decomposition-kestrel-b.json, 3.65, -10.94, 325.052",
+    })
+    void theBlowingAgentExamplesAnswerWhatTheReadmeSays(String name, double g300, double g400, double crossing)
+            throws Exception {
+        String body = Files.readString(Path.of("examples", name));
+        assertEquals(List.of(), ContractValidator.get().validate("ReactionRequest", body));
+        TestServer.shared().request().contentType("application/json").body(body).post("/v1/reaction")
+                .then().statusCode(200)
+                .body("gibbsEnergy.unit", equalTo("kJ/mol"))
+                .body("temperature.values[0]", closeTo(300.0, 0))
+                .body("gibbsEnergy.values[0]", closeTo(g300, 0.005))
+                .body("temperature.values[2]", closeTo(400.0, 0))
+                .body("gibbsEnergy.values[2]", closeTo(g400, 0.005))
+                .body("signChanges[0].temperature", closeTo(crossing, 0.0005))
+                .body("signChanges[0].direction", equalTo("positive-to-negative"));
+        String readme = Files.readString(Path.of("README.md"));
+        org.junit.jupiter.api.Assertions.assertTrue(readme.contains(String.format(java.util.Locale.ROOT, "%.3f K", crossing)), name);
+    }
 }
