@@ -35,12 +35,14 @@ final class ProtocolErrors extends ErrorHandler {
     protected void generateResponse(Request request, Response response, int code, String message, Throwable cause,
             Callback callback) {
         byte[] body = body(code, message);
+        SecurityHeaders.apply(response.getHeaders());
         response.getHeaders().put(HttpHeader.CONTENT_TYPE, Problem.MEDIA_TYPE);
         response.write(true, ByteBuffer.wrap(body), callback);
     }
 
     @Override
     public ByteBuffer badMessageError(int status, String reason, HttpFields.Mutable fields) {
+        SecurityHeaders.apply(fields);
         fields.put(HttpHeader.CONTENT_TYPE, Problem.MEDIA_TYPE);
         return ByteBuffer.wrap(body(status, reason));
     }

@@ -41,6 +41,11 @@ final class SecurityHeaders {
         }
         HttpFields.Mutable headers = jetty.getHeaders();
         headers.put(new PreEncodedHttpField(name, value)); // replaces, as setHeader does
+        apply(headers);
+    }
+
+    /** Sets the security headers on a response head Jetty writes itself (see {@link ProtocolErrors}). */
+    static void apply(HttpFields.Mutable headers) {
         for (PreEncodedHttpField field : FIELDS) {
             headers.put(field);
         }

@@ -62,6 +62,8 @@ class ProtocolErrorsApiTest {
         int split = answer.indexOf("\r\n\r\n");
         String head = answer.substring(0, split).toLowerCase(java.util.Locale.ROOT);
         assertTrue(head.contains("content-type: application/problem+json"), head);
+        assertTrue(head.contains("x-content-type-options: nosniff"), head);
+        assertTrue(head.contains("cache-control: no-store"), head);
         assertFalse(answer.toLowerCase(java.util.Locale.ROOT).contains("jetty"), answer);
         JsonNode problem = JSON.readTree(answer.substring(split + 4));
         assertEquals("https://statesum.org/problems/" + type, problem.get("type").asText());
