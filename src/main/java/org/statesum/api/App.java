@@ -41,7 +41,8 @@ public final class App {
             javalin.jetty.modifyServer(server -> server.setErrorHandler(new ProtocolErrors(mapper)));
             // /v1/sampled is streamed rather than parsed into a tree: its matrices reach 1e7 numbers (see
             // SampledBodyParser); in a batch, where the job body is a tree already, it reads the tree.
-            operations.install(javalin, compute, Map.of("/v1/sampled", ctx -> sampled.answer(bodies.openStreamed(ctx))));
+            operations.install(javalin, compute, Map.of("/v1/sampled",
+                    (ctx, ticket) -> sampled.answer(bodies.openStreamed(ctx, ticket))));
             ReadRoutes.add(javalin, problems, "/v1/constants", constants::get);
             ReadRoutes.add(javalin, problems, "/openapi.yaml", ctx -> ctx.contentType("application/yaml").result(openApi));
         });

@@ -55,7 +55,7 @@ final class BatchController {
 
     void post(Context ctx) throws InterruptedException {
         try (ComputeGate.Ticket ticket = gate.admit()) {
-            List<BatchJob> jobs = requests.read(bodies.read(ctx));
+            List<BatchJob> jobs = requests.read(bodies.read(ctx, ticket));
             long deadline = System.nanoTime() + ops.batchTimeLimitMillis() * 1_000_000L;
             ctx.status(200).contentType(MEDIA_TYPE);
             stream(ctx, jobs, ticket, deadline);

@@ -46,8 +46,9 @@ final class BodyReader {
         this.minBodyBytesPerSecond = config.operations().minBodyBytesPerSecond();
     }
 
-    JsonNode read(Context ctx) {
-        return parse(readBounded(ctx));
+    /** The body as a JSON tree, its memory reserved on {@code ticket} as it is read (503 if there is none). */
+    JsonNode read(Context ctx, ComputeGate.Ticket ticket) {
+        return parse(readBounded(ctx, ticket));
     }
 
     /** Parses a complete body; 400 for an empty body or anything the parser refuses. */
@@ -69,8 +70,9 @@ final class BodyReader {
      * decoding (413 beyond, so a small compressed body cannot expand without bound). Any other
      * content coding is refused with 415 (RFC 9110, section 15.5.16).
      */
-    InputStream openStreamed(Context ctx) {
-        return open(ctx, streamLimit);
+    InputStream openStreamed(Context ctx, ComputeGate.Ticket ticket) {
+        return new MeteredInputStream(open(ctx, streamLimit),
+                bytes -> ticket.reserveBody(bytes, ComputeGate.STREAMED_MEMORY_FACTOR));
     }
 
     private InputStream open(Context ctx, Limit limit) {
@@ -117,12 +119,21 @@ final class BodyReader {
                         + "MIN_BODY_BYTES_PER_SECOND)"));
     }
 
-    /** Reads at most the limit plus one byte, so a body without Content-Length cannot exhaust memory. */
-    private byte[] readBounded(Context ctx) {
+    /**
+     * Reads at most the limit plus one byte, so a body without Content-Length cannot exhaust memory,
+     * reserving the memory of its tree on the ticket: for the declared length before reading, else as
+     * the bytes arrive.
+     */
+    private byte[] readBounded(Context ctx, ComputeGate.Ticket ticket) {
         long declared = ctx.contentLength();
         boolean framed = declared >= 0 && declared <= MAX_ARRAY_BYTES && ctx.header("Content-Encoding") == null;
-        try (InputStream in = open(ctx, treeLimit)) {
-            return framed ? readDeclared(in, (int) declared) : in.readAllBytes();
+        try (InputStream in = new MeteredInputStream(open(ctx, treeLimit),
+                bytes -> ticket.reserveBody(bytes, ComputeGate.TREE_MEMORY_FACTOR))) {
+            if (framed) {
+                ticket.reserveBody(declared, ComputeGate.TREE_MEMORY_FACTOR);
+                return readDeclared(in, (int) declared);
+            }
+            return in.readAllBytes();
         } catch (IOException e) {
             throw BodyProblems.unreadable(e);
         }

@@ -12,8 +12,22 @@ import java.util.concurrent.atomic.AtomicInteger;
  * in arrival order, for at most {@code queueWaitMillis} (else 503). Batch jobs take compute slots from
  * the same pool, so direct and batch work share one bound. Once closed for shutdown, the gate admits
  * nothing more and the work in flight finishes.
+ *
+ * <p>Admitted requests also share a memory budget for their bodies ({@code BODY_MEMORY_BYTES}): a
+ * ticket reserves the memory of its body as the body is read, and a body that would take the budget
+ * past its end is refused with 503 at once, so that a few large bodies arriving together cannot run the
+ * heap out. A single body larger than the whole budget takes all of it.
  */
 final class ComputeGate {
+
+    /**
+     * Heap per byte of a body parsed into a JSON tree, counted generously: a tree of typical numbers
+     * takes 1.8 times its text (2 million doubles: 40 MB of text, 74 MB of tree, measured), short
+     * numbers up to about 7 times (a 16-byte node and a reference for "12,"), and the text itself 1.
+     */
+    static final int TREE_MEMORY_FACTOR = 8;
+    /** Heap per byte of a body streamed into arrays of doubles: 8 bytes a number of at least 2 characters. */
+    static final int STREAMED_MEMORY_FACTOR = 4;
 
     private final OperationsConfig ops;
     private final ServiceMetrics metrics;
@@ -21,6 +35,9 @@ final class ComputeGate {
     private final Semaphore slots;
     private final AtomicInteger admitted = new AtomicInteger();
     private final AtomicInteger running = new AtomicInteger();
+    /** The body memory budget in KiB (a semaphore counts ints; KiB reach 2 TiB). */
+    private final Semaphore memoryKib;
+    private final int totalKib;
     private volatile boolean closed;
 
     ComputeGate(OperationsConfig ops, ServiceMetrics metrics) {
@@ -28,6 +45,10 @@ final class ComputeGate {
         this.metrics = metrics;
         this.admissions = new Semaphore(ops.maxConcurrentJobs() + ops.maxQueuedRequests());
         this.slots = new Semaphore(ops.maxConcurrentJobs(), true);
+        this.totalKib = (int) Math.max(1, Math.min(Integer.MAX_VALUE, ops.bodyMemoryBytes() / 1024));
+        this.memoryKib = new Semaphore(totalKib);
+        metrics.gauge("statesum.body.memory.reserved.bytes", "bytes of the body memory budget reserved by admitted requests",
+                () -> (totalKib - memoryKib.availablePermits()) * 1024L);
         metrics.gauge("statesum.compute.running", "compute jobs running", running::get);
         metrics.gauge("statesum.compute.admitted", "requests admitted to compute, running or waiting",
                 admitted::get);
@@ -37,10 +58,11 @@ final class ComputeGate {
     /** Admits one request or throws a 503 problem; the caller closes the ticket when done. */
     Ticket admit() {
         if (closed) {
-            throw refused("shutting-down", "the service is shutting down; send the request to another replica");
+            throw refused("shutting-down", "Service shutting down",
+                    "the service is shutting down; send the request to another replica");
         }
         if (!admissions.tryAcquire()) {
-            throw refused("overloaded", "the service is at its limit of " + ops.maxConcurrentJobs()
+            throw refused("overloaded", "Service overloaded", "the service is at its limit of " + ops.maxConcurrentJobs()
                     + " running and " + ops.maxQueuedRequests() + " waiting requests (STATESUM_MAX_CONCURRENT_JOBS, "
                     + "STATESUM_MAX_QUEUED_REQUESTS); try again later");
         }
@@ -62,16 +84,37 @@ final class ComputeGate {
         return closed;
     }
 
-    private OverloadedException refused(String reason, String detail) {
+    /** The 503 of a refused request; {@code reason} names the metric, the problem type is the same for memory. */
+    private OverloadedException refused(String reason, String title, String detail) {
         metrics.rejected(reason);
-        return new OverloadedException(Problem.of(reason, reason.equals("overloaded") ? "Service overloaded"
-                : "Service shutting down", 503, detail, List.of()), ops.retryAfterSeconds());
+        String type = reason.equals("memory") ? "overloaded" : reason;
+        return new OverloadedException(Problem.of(type, title, 503, detail, List.of()), ops.retryAfterSeconds());
     }
 
     /** One admitted request: holds its admission until closed; takes compute slots for its jobs. */
     final class Ticket implements AutoCloseable {
 
         private boolean open = true;
+        /** KiB of the body memory budget this request holds. */
+        private int heldKib;
+
+        /**
+         * Makes sure the ticket holds memory for a body of which {@code bytes} have been read, at
+         * {@code factor} bytes of heap per byte; a 503 problem when the budget cannot give it now.
+         */
+        void reserveBody(long bytes, int factor) {
+            long wanted = Math.min(totalKib, (bytes * factor + 1023) / 1024);
+            if (wanted <= heldKib) {
+                return;
+            }
+            int more = (int) (wanted - heldKib);
+            if (!memoryKib.tryAcquire(more)) {
+                throw refused("memory", "Service overloaded", "the request bodies being handled fill the memory "
+                        + "set aside for them (" + ops.bodyMemoryBytes() + " bytes, STATESUM_BODY_MEMORY_BYTES); "
+                        + "try again later");
+            }
+            heldKib += more;
+        }
 
         /** Waits for a compute slot up to the queue wait (a direct request), else throws a 503 problem. */
         Slot slotOrRefuse() {
@@ -83,7 +126,7 @@ final class ComputeGate {
             } catch (InterruptedException e) {
                 Thread.currentThread().interrupt();
             }
-            throw refused("overloaded", "no compute slot became free within " + ops.queueWaitMillis()
+            throw refused("overloaded", "Service overloaded", "no compute slot became free within " + ops.queueWaitMillis()
                     + " ms (STATESUM_QUEUE_WAIT_MS); try again later");
         }
 
@@ -97,6 +140,8 @@ final class ComputeGate {
         public void close() {
             if (open) {
                 open = false;
+                memoryKib.release(heldKib);
+                heldKib = 0;
                 admitted.decrementAndGet();
                 admissions.release();
             }

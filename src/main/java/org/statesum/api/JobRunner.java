@@ -58,7 +58,8 @@ final class JobRunner {
             outcome = "cancelled";
             throw e;
         } catch (RuntimeException e) {
-            outcome = e instanceof org.statesum.engine.DomainException ? "invalid" : "error";
+            outcome = e instanceof org.statesum.engine.DomainException ? "invalid"
+                    : e instanceof OverloadedException ? "refused" : "error";
             throw e;
         } finally {
             metrics.compute(path, outcome, System.nanoTime() - start);

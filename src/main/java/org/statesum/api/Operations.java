@@ -15,7 +15,7 @@ import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.atomic.AtomicInteger;
-import java.util.function.Function;
+import java.util.function.BiFunction;
 import java.util.function.Supplier;
 import org.eclipse.jetty.ee10.servlet.FilterHolder;
 
@@ -55,7 +55,8 @@ final class Operations {
     /** A compute route that reads its own body from the request (streamed, never held as a tree). */
     @FunctionalInterface
     interface StreamedEndpoint {
-        Object answer(Context ctx);
+        /** The answer to the body of {@code ctx}, read under {@code ticket} (its memory reserved there). */
+        Object answer(Context ctx, ComputeGate.Ticket ticket);
     }
 
     /**
@@ -87,9 +88,9 @@ final class Operations {
         javalin.routes.before(access::before);
         compute.all().forEach((path, endpoint) -> javalin.routes.post(problems.allow("POST", path),
                 streamed.containsKey(path)
-                ? ctx -> direct(ctx, path, c -> () -> streamed.get(path).answer(c))
-                : ctx -> direct(ctx, path, c -> {
-                    JsonNode body = bodies.read(c);
+                ? ctx -> direct(ctx, path, (c, ticket) -> () -> streamed.get(path).answer(c, ticket))
+                : ctx -> direct(ctx, path, (c, ticket) -> {
+                    JsonNode body = bodies.read(c, ticket);
                     return () -> FiniteNumbers.answer(body, endpoint);
                 })));
         ExecutorService workers = Executors.newFixedThreadPool(ops.maxConcurrentJobs(), daemonThreads());
@@ -118,9 +119,10 @@ final class Operations {
      * written. A streamed endpoint reads as it computes, so its
      * reading happens inside the slot.
      */
-    private void direct(Context ctx, String path, Function<Context, Supplier<Object>> prepare) throws IOException {
+    private void direct(Context ctx, String path, BiFunction<Context, ComputeGate.Ticket, Supplier<Object>> prepare)
+            throws IOException {
         try (ComputeGate.Ticket ticket = gate.admit()) {
-            Supplier<Object> work = prepare.apply(ctx);
+            Supplier<Object> work = prepare.apply(ctx, ticket);
             byte[] json;
             boolean large;
             boolean gzip;

@@ -38,6 +38,10 @@ import java.util.Map;
  *        its pace is checked ({@code BODY_TIMEOUT_MS}, 10 000)
  * @param minBodyBytesPerSecond the slowest average pace a body may arrive at once the grace is over,
  *        0 for no check ({@code MIN_BODY_BYTES_PER_SECOND}, 16 384)
+ * @param bodyMemoryBytes the memory all admitted request bodies may take at once, counted as
+ *        {@link ComputeGate#TREE_MEMORY_FACTOR} times a body parsed whole and
+ *        {@link ComputeGate#STREAMED_MEMORY_FACTOR} times a streamed one; beyond it 503
+ *        ({@code BODY_MEMORY_BYTES}, half the maximum heap)
  */
 public record OperationsConfig(
         int maxConcurrentJobs,
@@ -53,7 +57,8 @@ public record OperationsConfig(
         List<String> corsOrigins,
         boolean accessLog,
         long bodyTimeoutMillis,
-        long minBodyBytesPerSecond) {
+        long minBodyBytesPerSecond,
+        long bodyMemoryBytes) {
 
     public OperationsConfig {
         corsOrigins = List.copyOf(corsOrigins);
@@ -63,42 +68,49 @@ public record OperationsConfig(
     public static OperationsConfig defaults() {
         int cores = Runtime.getRuntime().availableProcessors();
         return new OperationsConfig(cores, 32, 2_000, 30_000, 1, 10_000, cores, 600_000, 20_000,
-                BearerTokens.none(), List.of(), true, 10_000, 16_384);
+                BearerTokens.none(), List.of(), true, 10_000, 16_384, Runtime.getRuntime().maxMemory() / 2);
     }
 
     /** A copy with other concurrency limits (tests and benchmarks). */
     public OperationsConfig withConcurrency(int jobs, int queued, long queueWait) {
         return new OperationsConfig(jobs, queued, queueWait, timeLimitMillis, retryAfterSeconds, maxBatchJobs,
                 Math.min(batchParallelism, jobs), batchTimeLimitMillis, shutdownGraceMillis, tokens, corsOrigins,
-                accessLog, bodyTimeoutMillis, minBodyBytesPerSecond);
+                accessLog, bodyTimeoutMillis, minBodyBytesPerSecond, bodyMemoryBytes);
     }
 
     /** A copy with another job time limit. */
     public OperationsConfig withTimeLimit(long millis) {
         return new OperationsConfig(maxConcurrentJobs, maxQueuedRequests, queueWaitMillis, millis,
                 retryAfterSeconds, maxBatchJobs, batchParallelism, batchTimeLimitMillis, shutdownGraceMillis, tokens,
-                corsOrigins, accessLog, bodyTimeoutMillis, minBodyBytesPerSecond);
+                corsOrigins, accessLog, bodyTimeoutMillis, minBodyBytesPerSecond, bodyMemoryBytes);
     }
 
     /** A copy with other access rules. */
     public OperationsConfig withAccess(BearerTokens newTokens, List<String> origins) {
         return new OperationsConfig(maxConcurrentJobs, maxQueuedRequests, queueWaitMillis, timeLimitMillis,
                 retryAfterSeconds, maxBatchJobs, batchParallelism, batchTimeLimitMillis, shutdownGraceMillis,
-                newTokens, origins, accessLog, bodyTimeoutMillis, minBodyBytesPerSecond);
+                newTokens, origins, accessLog, bodyTimeoutMillis, minBodyBytesPerSecond, bodyMemoryBytes);
     }
 
     /** A copy with another batch parallelism. */
     public OperationsConfig withBatchParallelism(int parallelism) {
         return new OperationsConfig(maxConcurrentJobs, maxQueuedRequests, queueWaitMillis, timeLimitMillis,
                 retryAfterSeconds, maxBatchJobs, parallelism, batchTimeLimitMillis, shutdownGraceMillis, tokens,
-                corsOrigins, accessLog, bodyTimeoutMillis, minBodyBytesPerSecond);
+                corsOrigins, accessLog, bodyTimeoutMillis, minBodyBytesPerSecond, bodyMemoryBytes);
     }
 
     /** A copy with another pace for request bodies. */
     public OperationsConfig withBodyPace(long timeoutMillis, long bytesPerSecond) {
         return new OperationsConfig(maxConcurrentJobs, maxQueuedRequests, queueWaitMillis, timeLimitMillis,
                 retryAfterSeconds, maxBatchJobs, batchParallelism, batchTimeLimitMillis, shutdownGraceMillis, tokens,
-                corsOrigins, accessLog, timeoutMillis, bytesPerSecond);
+                corsOrigins, accessLog, timeoutMillis, bytesPerSecond, bodyMemoryBytes);
+    }
+
+    /** A copy with another memory budget for request bodies. */
+    public OperationsConfig withBodyMemory(long bytes) {
+        return new OperationsConfig(maxConcurrentJobs, maxQueuedRequests, queueWaitMillis, timeLimitMillis,
+                retryAfterSeconds, maxBatchJobs, batchParallelism, batchTimeLimitMillis, shutdownGraceMillis, tokens,
+                corsOrigins, accessLog, bodyTimeoutMillis, minBodyBytesPerSecond, bytes);
     }
 
     /** Reads the settings, adding a sentence to {@code problems} for every bad variable. */
@@ -120,7 +132,8 @@ public record OperationsConfig(
                 list(env.get(ServiceConfig.PREFIX + "CORS_ORIGINS")),
                 !"false".equalsIgnoreCase(String.valueOf(env.get(ServiceConfig.PREFIX + "ACCESS_LOG")).trim()),
                 ServiceConfig.read(env, "BODY_TIMEOUT_MS", d.bodyTimeoutMillis, 100, 3_600_000, problems),
-                ServiceConfig.read(env, "MIN_BODY_BYTES_PER_SECOND", d.minBodyBytesPerSecond, 0, 1L << 40, problems));
+                ServiceConfig.read(env, "MIN_BODY_BYTES_PER_SECOND", d.minBodyBytesPerSecond, 0, 1L << 40, problems),
+                ServiceConfig.read(env, "BODY_MEMORY_BYTES", d.bodyMemoryBytes, 1L << 20, 1L << 50, problems));
     }
 
     private static BearerTokens tokens(Map<String, String> env, List<String> problems) {
