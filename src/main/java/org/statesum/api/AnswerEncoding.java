@@ -1,6 +1,5 @@
 package org.statesum.api;
 
-import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.util.Locale;
@@ -50,18 +49,18 @@ final class AnswerEncoding {
         return 1;
     }
 
-    /** {@code json} gzipped at the fastest level (compression is done under the compute slot). */
-    static byte[] gzip(byte[] json) {
-        ByteArrayOutputStream out = new ByteArrayOutputStream(json.length / 3 + 64);
+    /** {@code json} gzipped at the fastest level into a buffer on {@code memory} (done under the compute slot). */
+    static AnswerBuffer gzip(AnswerBuffer json, ComputeGate.Memory memory) {
+        AnswerBuffer out = new AnswerBuffer(memory);
         try (GZIPOutputStream gzip = new GZIPOutputStream(out, 1 << 16) {
             {
                 def.setLevel(Deflater.BEST_SPEED);
             }
         }) {
-            gzip.write(json);
+            json.writeTo(gzip);
         } catch (IOException e) {
-            throw new UncheckedIOException(e); // a byte array does not fail
+            throw new UncheckedIOException(e); // memory does not fail
         }
-        return out.toByteArray();
+        return out;
     }
 }

@@ -65,8 +65,8 @@ final class BatchController {
     private void stream(Context ctx, List<BatchJob> jobs, ComputeGate.Ticket ticket, long deadline)
             throws InterruptedException {
         AtomicBoolean gone = new AtomicBoolean();
-        CompletionService<byte[]> done = new ExecutorCompletionService<>(workers);
-        Map<Future<byte[]>, BatchJob> pending = new HashMap<>();
+        CompletionService<Line> done = new ExecutorCompletionService<>(workers);
+        Map<Future<Line>, BatchJob> pending = new HashMap<>();
         int next = 0;
         OutputStream out;
         try {
@@ -79,9 +79,9 @@ final class BatchController {
             pending.put(done.submit(() -> line(job, ticket, deadline, gone)), job);
         }
         while (!pending.isEmpty()) {
-            Future<byte[]> finished = done.take();
+            Future<Line> finished = done.take();
             BatchJob finishedJob = pending.remove(finished);
-            byte[] line;
+            Line line;
             try {
                 line = finished.get();
             } catch (CancellationException e) {
@@ -95,8 +95,8 @@ final class BatchController {
                 metrics.batchJob("failed");
                 line = failureLine(finishedJob.id());
             }
-            try {
-                out.write(line);
+            try (ComputeGate.Memory held = line.memory()) {
+                line.bytes().writeTo(out);
                 out.flush();
             } catch (IOException e) {
                 gone.set(true);
@@ -108,7 +108,9 @@ final class BatchController {
             }
         }
         if (gone.get()) {
-            pending.keySet().forEach(f -> f.cancel(true));
+            // The jobs running see the client gone at their next checkpoint and end; a line one of them
+            // still finishes gives its memory back here (a cancelled future would drop it unreleased).
+            pending.keySet().forEach(BatchController::release);
             for (int i = next; i < jobs.size(); i++) {
                 metrics.batchJob("cancelled");
             }
@@ -116,8 +118,26 @@ final class BatchController {
         }
     }
 
+    /** One rendered line and the share of the memory budget it holds until it is written (null for none). */
+    record Line(AnswerBuffer bytes, ComputeGate.Memory memory) {
+    }
+
+    /** Waits for a job whose line will not be written and gives back the memory of its line. */
+    private static void release(Future<Line> future) {
+        try {
+            Line line = future.get();
+            if (line.memory() != null) {
+                line.memory().close();
+            }
+        } catch (ExecutionException | CancellationException e) {
+            // the job ended without a line: nothing was held
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
+    }
+
     /** Computes one job and renders its line; throws CancellationException if the client has gone. */
-    private byte[] line(BatchJob job, ComputeGate.Ticket ticket, long deadline, AtomicBoolean gone)
+    private Line line(BatchJob job, ComputeGate.Ticket ticket, long deadline, AtomicBoolean gone)
             throws IOException, InterruptedException {
         if (gone.get()) {
             metrics.batchJob("cancelled");
@@ -137,7 +157,7 @@ final class BatchController {
                 Object result = runner.run(job.path(), job.endpoint(), job.body(), deadline, gone::get);
                 line.put("status", 200);
                 line.put("result", result);
-                byte[] rendered = render(line); // in the slot: a large answer is CPU work too
+                Line rendered = render(line); // in the slot: a large answer is CPU work too
                 metrics.batchJob("answered");
                 return rendered;
             }
@@ -150,43 +170,55 @@ final class BatchController {
             line.put("status", problem.status());
             line.put("problem", problem);
             metrics.batchJob("failed");
-            return render(line);
+            return small(line);
         }
     }
 
-    private byte[] render(Map<String, Object> line) throws IOException {
-        byte[] json;
+    /** The line as JSON and a newline, its memory reserved (a 422 or 503 problem when it does not fit). */
+    private Line render(Map<String, Object> line) throws IOException {
+        ComputeGate.Memory memory = gate.memory();
+        boolean kept = false;
         try {
-            json = mapper.writeValueAsBytes(line);
+            AnswerBuffer bytes = AnswerBuffer.of(mapper, line, memory);
+            bytes.write('\n');
+            kept = true;
+            return new Line(bytes, memory);
         } catch (IOException e) {
             LOG.error("batch line could not be written", e);
             return failureLine((String) line.get("id"));
+        } finally {
+            if (!kept) {
+                memory.close(); // whatever went wrong, the line holds nothing
+            }
         }
-        return withNewline(json);
     }
 
     /** The line of a job that failed inside the service: its id, status 500 and a problem without details. */
-    private byte[] failureLine(String id) {
+    private Line failureLine(String id) {
         Map<String, Object> failed = new LinkedHashMap<>();
         failed.put("id", id);
         failed.put("status", 500);
         failed.put("problem", ProblemMapper.fromStatus(500));
+        return small(failed);
+    }
+
+    /** A line of a few hundred bytes, outside the budget (so that a full budget can still report itself). */
+    private Line small(Map<String, Object> line) {
+        AnswerBuffer bytes = new AnswerBuffer(null);
         try {
-            return withNewline(mapper.writeValueAsBytes(failed));
+            mapper.writeValue(bytes, line);
         } catch (IOException e) {
             throw new IllegalStateException("a string and a problem are always writable", e);
         }
-    }
-
-    private static byte[] withNewline(byte[] json) {
-        byte[] withNewline = new byte[json.length + 1];
-        System.arraycopy(json, 0, withNewline, 0, json.length);
-        withNewline[json.length] = '\n';
-        return withNewline;
+        bytes.write('\n');
+        return new Line(bytes, null);
     }
 
     /** The problem of a failed job, its pointers relative to the job object ("/body/levels/..."). */
     private static Problem problemOf(RuntimeException e) {
+        if (e instanceof OverloadedException o) {
+            return o.problem(); // the memory budget was full for now: the job may be sent again
+        }
         if (e instanceof ProblemException p) {
             Problem problem = p.problem();
             if (problem.type().endsWith("/not-found")) {

@@ -13,10 +13,12 @@ import java.util.concurrent.atomic.AtomicInteger;
  * the same pool, so direct and batch work share one bound. Once closed for shutdown, the gate admits
  * nothing more and the work in flight finishes.
  *
- * <p>Admitted requests also share a memory budget for their bodies ({@code BODY_MEMORY_BYTES}): a
- * ticket reserves the memory of its body as the body is read, and a body that would take the budget
- * past its end is refused with 503 at once, so that a few large bodies arriving together cannot run the
- * heap out. A single body larger than the whole budget takes all of it.
+ * <p>Requests in flight also share a memory budget ({@code MEMORY_BUDGET_BYTES}) for their bodies and
+ * answers: a ticket reserves the memory of its body as the body is read, an answer reserves its own
+ * as it is written ({@link AnswerBuffer}), and whatever would take the budget past its end is refused
+ * with 503 at once, so that a few large bodies or answers together cannot run the heap out. A single
+ * body larger than the budget takes three quarters of it (the rest stays for answers); a single answer
+ * larger than the whole budget is refused with 422, since it would never fit.
  */
 final class ComputeGate {
 
@@ -35,7 +37,7 @@ final class ComputeGate {
     private final Semaphore slots;
     private final AtomicInteger admitted = new AtomicInteger();
     private final AtomicInteger running = new AtomicInteger();
-    /** The body memory budget in KiB (a semaphore counts ints; KiB reach 2 TiB). */
+    /** The memory budget for bodies and answers in KiB (a semaphore counts ints; KiB reach 2 TiB). */
     private final Semaphore memoryKib;
     private final int totalKib;
     private volatile boolean closed;
@@ -45,9 +47,9 @@ final class ComputeGate {
         this.metrics = metrics;
         this.admissions = new Semaphore(ops.maxConcurrentJobs() + ops.maxQueuedRequests());
         this.slots = new Semaphore(ops.maxConcurrentJobs(), true);
-        this.totalKib = (int) Math.max(1, Math.min(Integer.MAX_VALUE, ops.bodyMemoryBytes() / 1024));
+        this.totalKib = (int) Math.max(1, Math.min(Integer.MAX_VALUE, ops.memoryBudgetBytes() / 1024));
         this.memoryKib = new Semaphore(totalKib);
-        metrics.gauge("statesum.body.memory.reserved.bytes", "bytes of the body memory budget reserved by admitted requests",
+        metrics.gauge("statesum.memory.reserved.bytes", "bytes of the memory budget held by request bodies and answers",
                 () -> (totalKib - memoryKib.availablePermits()) * 1024L);
         metrics.gauge("statesum.compute.running", "compute jobs running", running::get);
         metrics.gauge("statesum.compute.admitted", "requests admitted to compute, running or waiting",
@@ -91,29 +93,79 @@ final class ComputeGate {
         return new OverloadedException(Problem.of(type, title, 503, detail, List.of()), ops.retryAfterSeconds());
     }
 
+    /** A new, empty share of the memory budget (for an answer); the caller closes it when the answer is sent. */
+    Memory memory() {
+        return new Memory();
+    }
+
+    /** A share of the memory budget, grown as a body is read or an answer written, given back on close. */
+    final class Memory implements AutoCloseable {
+
+        /** KiB of the budget held. */
+        private int heldKib;
+
+        /**
+         * Makes sure this share covers {@code bytes} at {@code factor} bytes of heap each (at most the
+         * whole budget); a 503 problem when the budget cannot give it now.
+         */
+        synchronized void cover(long bytes, int factor) {
+            cover(bytes, factor, totalKib);
+        }
+
+        /** As {@link #cover}, holding at most {@code capKib}. */
+        private void cover(long bytes, int factor, long capKib) {
+            long wanted = Math.min(capKib, (bytes * factor + 1023) / 1024);
+            if (wanted <= heldKib) {
+                return;
+            }
+            int more = (int) (wanted - heldKib);
+            if (!memoryKib.tryAcquire(more)) {
+                throw refused("memory", "Service overloaded", "the requests being handled fill the memory set "
+                        + "aside for bodies and answers (" + ops.memoryBudgetBytes()
+                        + " bytes, STATESUM_MEMORY_BUDGET_BYTES); try again later");
+            }
+            heldKib += more;
+        }
+
+        /** As {@link #cover} for an answer of {@code bytes}: 422 when it alone would exceed the whole budget. */
+        synchronized void coverAnswer(long bytes) {
+            if (bytes > (long) totalKib * 1024) {
+                String detail = "the answer would exceed the " + ops.memoryBudgetBytes() + " bytes of memory set aside "
+                        + "for bodies and answers (STATESUM_MEMORY_BUDGET_BYTES); ask for fewer temperatures, "
+                        + "pressures, species or populations";
+                throw new ProblemException(Problem.of("answer-too-large", "Answer too large", 422, detail,
+                        List.of(new FieldError("", detail))));
+            }
+            cover(bytes, 1);
+        }
+
+        @Override
+        public synchronized void close() {
+            memoryKib.release(heldKib);
+            heldKib = 0;
+        }
+    }
+
     /** One admitted request: holds its admission until closed; takes compute slots for its jobs. */
     final class Ticket implements AutoCloseable {
 
         private boolean open = true;
-        /** KiB of the body memory budget this request holds. */
-        private int heldKib;
+        /** The share of the memory budget that the request's body takes. */
+        private final Memory body = new Memory();
 
         /**
          * Makes sure the ticket holds memory for a body of which {@code bytes} have been read, at
          * {@code factor} bytes of heap per byte; a 503 problem when the budget cannot give it now.
          */
         void reserveBody(long bytes, int factor) {
-            long wanted = Math.min(totalKib, (bytes * factor + 1023) / 1024);
-            if (wanted <= heldKib) {
-                return;
+            synchronized (body) {
+                body.cover(bytes, factor, totalKib - totalKib / 4); // a quarter stays for answers
             }
-            int more = (int) (wanted - heldKib);
-            if (!memoryKib.tryAcquire(more)) {
-                throw refused("memory", "Service overloaded", "the request bodies being handled fill the memory "
-                        + "set aside for them (" + ops.bodyMemoryBytes() + " bytes, STATESUM_BODY_MEMORY_BYTES); "
-                        + "try again later");
-            }
-            heldKib += more;
+        }
+
+        /** Gives back the memory of the body once the job has been computed (its tree is no longer used). */
+        void releaseBody() {
+            body.close();
         }
 
         /** Waits for a compute slot up to the queue wait (a direct request), else throws a 503 problem. */
@@ -140,8 +192,7 @@ final class ComputeGate {
         public void close() {
             if (open) {
                 open = false;
-                memoryKib.release(heldKib);
-                heldKib = 0;
+                body.close();
                 admitted.decrementAndGet();
                 admissions.release();
             }

@@ -121,20 +121,22 @@ final class Operations {
      */
     private void direct(Context ctx, String path, BiFunction<Context, ComputeGate.Ticket, Supplier<Object>> prepare)
             throws IOException {
-        try (ComputeGate.Ticket ticket = gate.admit()) {
+        try (ComputeGate.Ticket ticket = gate.admit(); ComputeGate.Memory answerMemory = gate.memory()) {
             Supplier<Object> work = prepare.apply(ctx, ticket);
-            byte[] json;
+            AnswerBuffer answer;
             boolean large;
             boolean gzip;
             try (ComputeGate.Slot slot = ticket.slotOrRefuse()) {
-                json = mapper.writeValueAsBytes(runner.run(path, work, JobRunner.noOuterDeadline(), () -> false));
-                large = json.length >= AnswerEncoding.MIN_BYTES;
+                Object result = runner.run(path, work, JobRunner.noOuterDeadline(), () -> false);
+                work = null; // the body's tree is garbage from here on: its memory makes room for the answer
+                ticket.releaseBody();
+                answer = AnswerBuffer.of(mapper, result, answerMemory);
+                large = answer.size() >= AnswerEncoding.MIN_BYTES;
                 gzip = large && AnswerEncoding.acceptsGzip(ctx.header("Accept-Encoding"));
                 if (gzip) {
-                    json = AnswerEncoding.gzip(json);
+                    answer = AnswerEncoding.gzip(answer, answerMemory);
                 }
             }
-            // written straight to the response: no copy through Javalin's result stream
             ctx.status(200).contentType("application/json");
             if (large) {
                 ctx.res().setHeader("Vary", "Accept-Encoding");
@@ -142,8 +144,9 @@ final class Operations {
             if (gzip) {
                 ctx.res().setHeader("Content-Encoding", "gzip");
             }
-            ctx.res().setContentLength(json.length);
-            ctx.res().getOutputStream().write(json);
+            // written straight to the response: no copy through Javalin's result stream
+            ctx.res().setContentLengthLong(answer.size());
+            answer.writeTo(ctx.res().getOutputStream());
         }
     }
 

@@ -38,10 +38,10 @@ import java.util.Map;
  *        its pace is checked ({@code BODY_TIMEOUT_MS}, 10 000)
  * @param minBodyBytesPerSecond the slowest average pace a body may arrive at once the grace is over,
  *        0 for no check ({@code MIN_BODY_BYTES_PER_SECOND}, 16 384)
- * @param bodyMemoryBytes the memory all admitted request bodies may take at once, counted as
- *        {@link ComputeGate#TREE_MEMORY_FACTOR} times a body parsed whole and
- *        {@link ComputeGate#STREAMED_MEMORY_FACTOR} times a streamed one; beyond it 503
- *        ({@code BODY_MEMORY_BYTES}, half the maximum heap)
+ * @param memoryBudgetBytes the memory the bodies and answers of the requests in flight may take at
+ *        once, a body counted {@link ComputeGate#TREE_MEMORY_FACTOR} times its size when parsed whole
+ *        and {@link ComputeGate#STREAMED_MEMORY_FACTOR} times when streamed; beyond it 503
+ *        ({@code MEMORY_BUDGET_BYTES}, a quarter of the maximum heap: the rest holds the jobs' own arrays)
  */
 public record OperationsConfig(
         int maxConcurrentJobs,
@@ -58,7 +58,7 @@ public record OperationsConfig(
         boolean accessLog,
         long bodyTimeoutMillis,
         long minBodyBytesPerSecond,
-        long bodyMemoryBytes) {
+        long memoryBudgetBytes) {
 
     public OperationsConfig {
         corsOrigins = List.copyOf(corsOrigins);
@@ -68,46 +68,46 @@ public record OperationsConfig(
     public static OperationsConfig defaults() {
         int cores = Runtime.getRuntime().availableProcessors();
         return new OperationsConfig(cores, 32, 2_000, 30_000, 1, 10_000, cores, 600_000, 20_000,
-                BearerTokens.none(), List.of(), true, 10_000, 16_384, Runtime.getRuntime().maxMemory() / 2);
+                BearerTokens.none(), List.of(), true, 10_000, 16_384, Runtime.getRuntime().maxMemory() / 4);
     }
 
     /** A copy with other concurrency limits (tests and benchmarks). */
     public OperationsConfig withConcurrency(int jobs, int queued, long queueWait) {
         return new OperationsConfig(jobs, queued, queueWait, timeLimitMillis, retryAfterSeconds, maxBatchJobs,
                 Math.min(batchParallelism, jobs), batchTimeLimitMillis, shutdownGraceMillis, tokens, corsOrigins,
-                accessLog, bodyTimeoutMillis, minBodyBytesPerSecond, bodyMemoryBytes);
+                accessLog, bodyTimeoutMillis, minBodyBytesPerSecond, memoryBudgetBytes);
     }
 
     /** A copy with another job time limit. */
     public OperationsConfig withTimeLimit(long millis) {
         return new OperationsConfig(maxConcurrentJobs, maxQueuedRequests, queueWaitMillis, millis,
                 retryAfterSeconds, maxBatchJobs, batchParallelism, batchTimeLimitMillis, shutdownGraceMillis, tokens,
-                corsOrigins, accessLog, bodyTimeoutMillis, minBodyBytesPerSecond, bodyMemoryBytes);
+                corsOrigins, accessLog, bodyTimeoutMillis, minBodyBytesPerSecond, memoryBudgetBytes);
     }
 
     /** A copy with other access rules. */
     public OperationsConfig withAccess(BearerTokens newTokens, List<String> origins) {
         return new OperationsConfig(maxConcurrentJobs, maxQueuedRequests, queueWaitMillis, timeLimitMillis,
                 retryAfterSeconds, maxBatchJobs, batchParallelism, batchTimeLimitMillis, shutdownGraceMillis,
-                newTokens, origins, accessLog, bodyTimeoutMillis, minBodyBytesPerSecond, bodyMemoryBytes);
+                newTokens, origins, accessLog, bodyTimeoutMillis, minBodyBytesPerSecond, memoryBudgetBytes);
     }
 
     /** A copy with another batch parallelism. */
     public OperationsConfig withBatchParallelism(int parallelism) {
         return new OperationsConfig(maxConcurrentJobs, maxQueuedRequests, queueWaitMillis, timeLimitMillis,
                 retryAfterSeconds, maxBatchJobs, parallelism, batchTimeLimitMillis, shutdownGraceMillis, tokens,
-                corsOrigins, accessLog, bodyTimeoutMillis, minBodyBytesPerSecond, bodyMemoryBytes);
+                corsOrigins, accessLog, bodyTimeoutMillis, minBodyBytesPerSecond, memoryBudgetBytes);
     }
 
     /** A copy with another pace for request bodies. */
     public OperationsConfig withBodyPace(long timeoutMillis, long bytesPerSecond) {
         return new OperationsConfig(maxConcurrentJobs, maxQueuedRequests, queueWaitMillis, timeLimitMillis,
                 retryAfterSeconds, maxBatchJobs, batchParallelism, batchTimeLimitMillis, shutdownGraceMillis, tokens,
-                corsOrigins, accessLog, timeoutMillis, bytesPerSecond, bodyMemoryBytes);
+                corsOrigins, accessLog, timeoutMillis, bytesPerSecond, memoryBudgetBytes);
     }
 
     /** A copy with another memory budget for request bodies. */
-    public OperationsConfig withBodyMemory(long bytes) {
+    public OperationsConfig withMemoryBudget(long bytes) {
         return new OperationsConfig(maxConcurrentJobs, maxQueuedRequests, queueWaitMillis, timeLimitMillis,
                 retryAfterSeconds, maxBatchJobs, batchParallelism, batchTimeLimitMillis, shutdownGraceMillis, tokens,
                 corsOrigins, accessLog, bodyTimeoutMillis, minBodyBytesPerSecond, bytes);
@@ -133,7 +133,7 @@ public record OperationsConfig(
                 !"false".equalsIgnoreCase(String.valueOf(env.get(ServiceConfig.PREFIX + "ACCESS_LOG")).trim()),
                 ServiceConfig.read(env, "BODY_TIMEOUT_MS", d.bodyTimeoutMillis, 100, 3_600_000, problems),
                 ServiceConfig.read(env, "MIN_BODY_BYTES_PER_SECOND", d.minBodyBytesPerSecond, 0, 1L << 40, problems),
-                ServiceConfig.read(env, "BODY_MEMORY_BYTES", d.bodyMemoryBytes, 1L << 20, 1L << 50, problems));
+                ServiceConfig.read(env, "MEMORY_BUDGET_BYTES", d.memoryBudgetBytes, 1L << 20, 1L << 50, problems));
     }
 
     private static BearerTokens tokens(Map<String, String> env, List<String> problems) {

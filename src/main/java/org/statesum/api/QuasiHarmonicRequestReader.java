@@ -73,6 +73,13 @@ final class QuasiHarmonicRequestReader {
         Optional<Crystal[]> crystals = phonons(root, base, atoms, count, volumes, fields);
         Optional<Vibrations[]> vib = crystals.map(cs -> java.util.Arrays.stream(cs).map(Crystal::vibrations)
                 .toArray(Vibrations[]::new));
+        if (temperatures.isPresent() && pressures.isPresent()
+                && (long) temperatures.get().length * pressures.get().length > config.maxTemperatures()) {
+            // every series is answered on the (P, T) grid: it is held to the size of a temperature grid
+            fields.add(base + "/pressures/values", "pressures x temperatures = " + (long) temperatures.get().length
+                    * pressures.get().length + " exceeds the limit of " + config.maxTemperatures()
+                    + " (P, T) points (STATESUM_MAX_TEMPERATURES)");
+        }
         if (vib.isPresent() && temperatures.isPresent() && pressures.isPresent()) {
             long work = 0;
             for (Vibrations x : vib.get()) {
