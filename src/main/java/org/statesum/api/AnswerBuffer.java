@@ -10,7 +10,7 @@ import java.util.List;
 /**
  * An answer serialized into memory before it is sent (so that its length is known and the compute
  * slot is free before a slow client reads it), held in blocks that are never copied as it grows, each
- * block's memory reserved in the budget before it is allocated ({@link ComputeGate.Memory#coverAnswer}:
+ * block's memory reserved in the budget before it is allocated ({@link MemoryBudget.Share#coverAnswer}:
  * 503 when the budget is full for now, 422 when the answer alone would exceed it). Blocks start small,
  * for the common answer of a few kilobytes, and double up to 1 MiB.
  */
@@ -20,19 +20,19 @@ final class AnswerBuffer extends OutputStream {
     private static final int LARGEST_BLOCK = 1 << 20;
 
     /** The share of the budget to grow, or null for a small fixed answer that needs none. */
-    private final ComputeGate.Memory memory;
+    private final MemoryBudget.Share memory;
     private final List<byte[]> blocks = new ArrayList<>();
     private byte[] current;
     private int position;
     private long size;
     private long allocated;
 
-    AnswerBuffer(ComputeGate.Memory memory) {
+    AnswerBuffer(MemoryBudget.Share memory) {
         this.memory = memory;
     }
 
     /** {@code value} as JSON in a new buffer on {@code memory}; the budget's problems come out as themselves. */
-    static AnswerBuffer of(ObjectMapper mapper, Object value, ComputeGate.Memory memory) throws IOException {
+    static AnswerBuffer of(ObjectMapper mapper, Object value, MemoryBudget.Share memory) throws IOException {
         AnswerBuffer buffer = new AnswerBuffer(memory);
         try {
             mapper.writeValue(buffer, value);

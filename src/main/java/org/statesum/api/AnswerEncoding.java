@@ -50,7 +50,7 @@ final class AnswerEncoding {
     }
 
     /** {@code json} gzipped at the fastest level into a buffer on {@code memory} (done under the compute slot). */
-    static AnswerBuffer gzip(AnswerBuffer json, ComputeGate.Memory memory) {
+    static AnswerBuffer gzip(AnswerBuffer json, MemoryBudget.Share memory) {
         AnswerBuffer out = new AnswerBuffer(memory);
         try (GZIPOutputStream gzip = new GZIPOutputStream(out, 1 << 16) {
             {

@@ -95,7 +95,7 @@ final class BatchController {
                 metrics.batchJob("failed");
                 line = failureLine(finishedJob.id());
             }
-            try (ComputeGate.Memory held = line.memory()) {
+            try (MemoryBudget.Share held = line.memory()) {
                 line.bytes().writeTo(out);
                 out.flush();
             } catch (IOException e) {
@@ -119,7 +119,7 @@ final class BatchController {
     }
 
     /** One rendered line and the share of the memory budget it holds until it is written (null for none). */
-    record Line(AnswerBuffer bytes, ComputeGate.Memory memory) {
+    record Line(AnswerBuffer bytes, MemoryBudget.Share memory) {
     }
 
     /** Waits for a job whose line will not be written and gives back the memory of its line. */
@@ -176,7 +176,7 @@ final class BatchController {
 
     /** The line as JSON and a newline, its memory reserved (a 422 or 503 problem when it does not fit). */
     private Line render(Map<String, Object> line) throws IOException {
-        ComputeGate.Memory memory = gate.memory();
+        MemoryBudget.Share memory = gate.memory();
         boolean kept = false;
         try {
             AnswerBuffer bytes = AnswerBuffer.of(mapper, line, memory);

@@ -72,7 +72,7 @@ final class BodyReader {
      */
     InputStream openStreamed(Context ctx, ComputeGate.Ticket ticket) {
         return new MeteredInputStream(open(ctx, streamLimit),
-                bytes -> ticket.reserveBody(bytes, ComputeGate.STREAMED_MEMORY_FACTOR));
+                bytes -> ticket.reserveBody(bytes, MemoryBudget.STREAMED_FACTOR));
     }
 
     private InputStream open(Context ctx, Limit limit) {
@@ -128,9 +128,9 @@ final class BodyReader {
         long declared = ctx.contentLength();
         boolean framed = declared >= 0 && declared <= MAX_ARRAY_BYTES && ctx.header("Content-Encoding") == null;
         try (InputStream in = new MeteredInputStream(open(ctx, treeLimit),
-                bytes -> ticket.reserveBody(bytes, ComputeGate.TREE_MEMORY_FACTOR))) {
+                bytes -> ticket.reserveBody(bytes, MemoryBudget.TREE_FACTOR))) {
             if (framed) {
-                ticket.reserveBody(declared, ComputeGate.TREE_MEMORY_FACTOR);
+                ticket.reserveBody(declared, MemoryBudget.TREE_FACTOR);
                 return readDeclared(in, (int) declared);
             }
             return in.readAllBytes();

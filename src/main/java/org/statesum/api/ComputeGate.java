@@ -13,23 +13,11 @@ import java.util.concurrent.atomic.AtomicInteger;
  * the same pool, so direct and batch work share one bound. Once closed for shutdown, the gate admits
  * nothing more and the work in flight finishes.
  *
- * <p>Requests in flight also share a memory budget ({@code MEMORY_BUDGET_BYTES}) for their bodies and
- * answers: a ticket reserves the memory of its body as the body is read, an answer reserves its own
- * as it is written ({@link AnswerBuffer}), and whatever would take the budget past its end is refused
- * with 503 at once, so that a few large bodies or answers together cannot run the heap out. A single
- * body larger than the budget takes three quarters of it (the rest stays for answers); a single answer
- * larger than the whole budget is refused with 422, since it would never fit.
+ * <p>Requests in flight also share a {@link MemoryBudget} for their bodies and answers: a ticket holds
+ * the share of its body, reserved as the body is read and given back once the job is computed or the
+ * request ends.
  */
 final class ComputeGate {
-
-    /**
-     * Heap per byte of a body parsed into a JSON tree, counted generously: a tree of typical numbers
-     * takes 1.8 times its text (2 million doubles: 40 MB of text, 74 MB of tree, measured), short
-     * numbers up to about 7 times (a 16-byte node and a reference for "12,"), and the text itself 1.
-     */
-    static final int TREE_MEMORY_FACTOR = 8;
-    /** Heap per byte of a body streamed into arrays of doubles: 8 bytes a number of at least 2 characters. */
-    static final int STREAMED_MEMORY_FACTOR = 4;
 
     private final OperationsConfig ops;
     private final ServiceMetrics metrics;
@@ -37,9 +25,7 @@ final class ComputeGate {
     private final Semaphore slots;
     private final AtomicInteger admitted = new AtomicInteger();
     private final AtomicInteger running = new AtomicInteger();
-    /** The memory budget for bodies and answers in KiB (a semaphore counts ints; KiB reach 2 TiB). */
-    private final Semaphore memoryKib;
-    private final int totalKib;
+    private final MemoryBudget memory;
     private volatile boolean closed;
 
     ComputeGate(OperationsConfig ops, ServiceMetrics metrics) {
@@ -47,10 +33,7 @@ final class ComputeGate {
         this.metrics = metrics;
         this.admissions = new Semaphore(ops.maxConcurrentJobs() + ops.maxQueuedRequests());
         this.slots = new Semaphore(ops.maxConcurrentJobs(), true);
-        this.totalKib = (int) Math.max(1, Math.min(Integer.MAX_VALUE, ops.memoryBudgetBytes() / 1024));
-        this.memoryKib = new Semaphore(totalKib);
-        metrics.gauge("statesum.memory.reserved.bytes", "bytes of the memory budget held by request bodies and answers",
-                () -> (totalKib - memoryKib.availablePermits()) * 1024L);
+        this.memory = new MemoryBudget(ops, metrics);
         metrics.gauge("statesum.compute.running", "compute jobs running", running::get);
         metrics.gauge("statesum.compute.admitted", "requests admitted to compute, running or waiting",
                 admitted::get);
@@ -86,64 +69,15 @@ final class ComputeGate {
         return closed;
     }
 
-    /** The 503 of a refused request; {@code reason} names the metric, the problem type is the same for memory. */
+    /** The 503 of a refused request; {@code reason} is the problem type and the metric's label. */
     private OverloadedException refused(String reason, String title, String detail) {
         metrics.rejected(reason);
-        String type = reason.equals("memory") ? "overloaded" : reason;
-        return new OverloadedException(Problem.of(type, title, 503, detail, List.of()), ops.retryAfterSeconds());
+        return new OverloadedException(Problem.of(reason, title, 503, detail, List.of()), ops.retryAfterSeconds());
     }
 
     /** A new, empty share of the memory budget (for an answer); the caller closes it when the answer is sent. */
-    Memory memory() {
-        return new Memory();
-    }
-
-    /** A share of the memory budget, grown as a body is read or an answer written, given back on close. */
-    final class Memory implements AutoCloseable {
-
-        /** KiB of the budget held. */
-        private int heldKib;
-
-        /**
-         * Makes sure this share covers {@code bytes} at {@code factor} bytes of heap each (at most the
-         * whole budget); a 503 problem when the budget cannot give it now.
-         */
-        synchronized void cover(long bytes, int factor) {
-            cover(bytes, factor, totalKib);
-        }
-
-        /** As {@link #cover}, holding at most {@code capKib}. */
-        private void cover(long bytes, int factor, long capKib) {
-            long wanted = Math.min(capKib, (bytes * factor + 1023) / 1024);
-            if (wanted <= heldKib) {
-                return;
-            }
-            int more = (int) (wanted - heldKib);
-            if (!memoryKib.tryAcquire(more)) {
-                throw refused("memory", "Service overloaded", "the requests being handled fill the memory set "
-                        + "aside for bodies and answers (" + ops.memoryBudgetBytes()
-                        + " bytes, STATESUM_MEMORY_BUDGET_BYTES); try again later");
-            }
-            heldKib += more;
-        }
-
-        /** As {@link #cover} for an answer of {@code bytes}: 422 when it alone would exceed the whole budget. */
-        synchronized void coverAnswer(long bytes) {
-            if (bytes > (long) totalKib * 1024) {
-                String detail = "the answer would exceed the " + ops.memoryBudgetBytes() + " bytes of memory set aside "
-                        + "for bodies and answers (STATESUM_MEMORY_BUDGET_BYTES); ask for fewer temperatures, "
-                        + "pressures, species or populations";
-                throw new ProblemException(Problem.of("answer-too-large", "Answer too large", 422, detail,
-                        List.of(new FieldError("", detail))));
-            }
-            cover(bytes, 1);
-        }
-
-        @Override
-        public synchronized void close() {
-            memoryKib.release(heldKib);
-            heldKib = 0;
-        }
+    MemoryBudget.Share memory() {
+        return memory.share();
     }
 
     /** One admitted request: holds its admission until closed; takes compute slots for its jobs. */
@@ -151,16 +85,14 @@ final class ComputeGate {
 
         private boolean open = true;
         /** The share of the memory budget that the request's body takes. */
-        private final Memory body = new Memory();
+        private final MemoryBudget.Share body = memory.share();
 
         /**
          * Makes sure the ticket holds memory for a body of which {@code bytes} have been read, at
          * {@code factor} bytes of heap per byte; a 503 problem when the budget cannot give it now.
          */
         void reserveBody(long bytes, int factor) {
-            synchronized (body) {
-                body.cover(bytes, factor, totalKib - totalKib / 4); // a quarter stays for answers
-            }
+            body.coverBody(bytes, factor);
         }
 
         /** Gives back the memory of the body once the job has been computed (its tree is no longer used). */

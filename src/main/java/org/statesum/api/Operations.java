@@ -121,7 +121,7 @@ final class Operations {
      */
     private void direct(Context ctx, String path, BiFunction<Context, ComputeGate.Ticket, Supplier<Object>> prepare)
             throws IOException {
-        try (ComputeGate.Ticket ticket = gate.admit(); ComputeGate.Memory answerMemory = gate.memory()) {
+        try (ComputeGate.Ticket ticket = gate.admit(); MemoryBudget.Share answerMemory = gate.memory()) {
             Supplier<Object> work = prepare.apply(ctx, ticket);
             AnswerBuffer answer;
             boolean large;

@@ -39,8 +39,8 @@ import java.util.Map;
  * @param minBodyBytesPerSecond the slowest average pace a body may arrive at once the grace is over,
  *        0 for no check ({@code MIN_BODY_BYTES_PER_SECOND}, 16 384)
  * @param memoryBudgetBytes the memory the bodies and answers of the requests in flight may take at
- *        once, a body counted {@link ComputeGate#TREE_MEMORY_FACTOR} times its size when parsed whole
- *        and {@link ComputeGate#STREAMED_MEMORY_FACTOR} times when streamed; beyond it 503
+ *        once, a body counted {@link MemoryBudget#TREE_FACTOR} times its size when parsed whole
+ *        and {@link MemoryBudget#STREAMED_FACTOR} times when streamed; beyond it 503
  *        ({@code MEMORY_BUDGET_BYTES}, a quarter of the maximum heap: the rest holds the jobs' own arrays)
  */
 public record OperationsConfig(

@@ -32,21 +32,21 @@ class AnswerBufferTest {
     @Test
     void anAnswerReservesItsBlocksAndOneLargerThanTheBudgetIs422() {
         ComputeGate gate = gate(4 << 20);
-        try (ComputeGate.Memory memory = gate.memory()) {
+        try (MemoryBudget.Share memory = gate.memory()) {
             AnswerBuffer buffer = new AnswerBuffer(memory);
             buffer.write(new byte[3 << 20], 0, 3 << 20); // 3 MiB in blocks of up to 1 MiB: fits in 4 MiB
-            ComputeGate.Memory other = gate.memory();
+            MemoryBudget.Share other = gate.memory();
             assertThrows(OverloadedException.class, () -> other.cover(2 << 20, 1)); // the rest is too small: 503
             other.close();
         }
-        try (ComputeGate.Memory memory = gate.memory()) {
+        try (MemoryBudget.Share memory = gate.memory()) {
             AnswerBuffer buffer = new AnswerBuffer(memory);
             ProblemException tooLarge = assertThrows(ProblemException.class,
                     () -> buffer.write(new byte[5 << 20], 0, 5 << 20));
             assertEquals(422, tooLarge.problem().status());
             assertEquals("https://statesum.org/problems/answer-too-large", tooLarge.problem().type());
         }
-        try (ComputeGate.Memory all = gate.memory()) {
+        try (MemoryBudget.Share all = gate.memory()) {
             all.cover(4 << 20, 1); // everything was given back
         }
     }

@@ -31,7 +31,7 @@ class ComputeGateTest {
         third.reserveBody(100 * 1024, 4); // 400 KiB fit in what the first gave back
         second.close();
         third.close();
-        try (ComputeGate.Memory whole = gate.memory()) {
+        try (MemoryBudget.Share whole = gate.memory()) {
             whole.cover(BUDGET, 1); // the whole budget is free again
         }
     }
@@ -50,7 +50,7 @@ class ComputeGateTest {
         growing.close();
         ComputeGate.Ticket huge = gate.admit();
         huge.reserveBody(64L << 20, 8); // 512 MiB wanted: capped at three quarters of the budget, not refused
-        try (ComputeGate.Memory answer = gate.memory()) {
+        try (MemoryBudget.Share answer = gate.memory()) {
             answer.coverAnswer(256 * 1024); // the last quarter stays free for its answer
             assertThrows(OverloadedException.class, () -> gate.admit().reserveBody(1, 1));
         }
