@@ -3,6 +3,7 @@ package org.statesum.api;
 import com.fasterxml.jackson.databind.JsonNode;
 import java.util.ArrayList;
 import java.util.Iterator;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -17,16 +18,25 @@ import java.util.TreeSet;
  */
 final class Fields {
 
-    private final List<FieldError> errors = new ArrayList<>();
+    /** The problems by pointer, in the order found (constant time a problem, however many a body holds). */
+    private final Map<String, FieldError> errors = new LinkedHashMap<>();
+    /** Problems found after {@link ProblemException#MAX_LISTED_ERRORS} were kept: counted, not held. */
+    private int unlisted;
 
-    /** Records a problem; only the first one found at a pointer is kept ("is required", not also "must be a number"). */
+    /**
+     * Records a problem; only the first one found at a pointer is kept ("is required", not also "must be
+     * a number"). Beyond {@link ProblemException#MAX_LISTED_ERRORS} problems are only counted, so that a
+     * body of a million bad fields costs neither quadratic time nor a problem document of its size.
+     */
     void add(String pointer, String message) {
-        for (FieldError known : errors) {
-            if (known.pointer().equals(pointer)) {
-                return;
-            }
+        if (errors.containsKey(pointer)) {
+            return;
         }
-        errors.add(new FieldError(pointer, message));
+        if (errors.size() >= ProblemException.MAX_LISTED_ERRORS) {
+            unlisted++;
+            return;
+        }
+        errors.put(pointer, new FieldError(pointer, message));
     }
 
     boolean hasErrors() {
@@ -35,12 +45,12 @@ final class Fields {
 
     /** How many problems have been collected so far (to tell whether one part of a request added any). */
     int count() {
-        return errors.size();
+        return errors.size() + unlisted;
     }
 
     void throwIfAny() {
         if (!errors.isEmpty()) {
-            throw ProblemException.invalid(errors);
+            throw ProblemException.invalid(new ArrayList<>(errors.values()), unlisted);
         }
     }
 

@@ -4,12 +4,8 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.NullNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import java.util.ArrayList;
 import java.util.Iterator;
-import java.util.List;
 import java.util.Map;
-import java.util.Set;
-import java.util.stream.Collectors;
 
 /**
  * Keeps every number that is not a finite double away from the endpoints while still naming every
@@ -29,27 +25,27 @@ final class FiniteNumbers {
             // the common case: one walk without pointers or allocation, and the endpoint answers
             return endpoint.answer(root);
         }
-        List<FieldError> bad = new ArrayList<>();
+        // Fields keeps the first problem at each pointer and holds at most MAX_LISTED_ERRORS of them
+        Fields bad = new Fields();
         if (root.isNumber()) {
             check(root, "", bad);
         } else {
             scrub(root, "", bad);
         }
-        if (bad.isEmpty()) {
+        if (!bad.hasErrors()) {
             return endpoint.answer(root);
         }
-        List<FieldError> all = new ArrayList<>(bad);
         if (!root.isNumber()) {
             try {
                 endpoint.answer(root);
             } catch (ProblemException e) {
-                Set<String> named = bad.stream().map(FieldError::pointer).collect(Collectors.toSet());
-                e.problem().errors().stream().filter(f -> !named.contains(f.pointer())).forEach(all::add);
+                e.problem().errors().forEach(f -> bad.add(f.pointer(), f.message()));
             } catch (RuntimeException e) {
                 // Anything else the endpoint says about a request with holes in it is beside the point.
             }
         }
-        throw ProblemException.invalid(all);
+        bad.throwIfAny();
+        throw new IllegalStateException("unreachable: problems were found");
     }
 
     /** Whether every number in {@code node} is a finite double (no pointers built: the usual case). */
@@ -66,7 +62,7 @@ final class FiniteNumbers {
     }
 
     /** Replaces each non-finite number below {@code node} by null, recording where it was. */
-    private static void scrub(JsonNode node, String pointer, List<FieldError> bad) {
+    private static void scrub(JsonNode node, String pointer, Fields bad) {
         if (node instanceof ArrayNode array) {
             for (int i = 0; i < array.size(); i++) {
                 String at = pointer + "/" + i;
@@ -90,17 +86,17 @@ final class FiniteNumbers {
     }
 
     /** Whether {@code node} is a non-finite number; if so, records why. */
-    private static boolean check(JsonNode node, String pointer, List<FieldError> bad) {
+    private static boolean check(JsonNode node, String pointer, Fields bad) {
         if (!node.isNumber()) {
             return false;
         }
         double value = node.doubleValue();
         if (Double.isNaN(value)) {
-            bad.add(new FieldError(pointer, "NaN is not a number; JSON numbers must be finite"));
+            bad.add(pointer, "NaN is not a number; JSON numbers must be finite");
             return true;
         }
         if (Double.isInfinite(value)) {
-            bad.add(new FieldError(pointer, "is infinite or beyond the range of a double (about 1.8e308)"));
+            bad.add(pointer, "is infinite or beyond the range of a double (about 1.8e308)");
             return true;
         }
         return false;
