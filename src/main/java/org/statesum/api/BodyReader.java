@@ -113,10 +113,10 @@ final class BodyReader {
         if (minBodyBytesPerSecond <= 0) {
             return raw;
         }
-        return new PacedInputStream(raw, bodyTimeoutMillis * 1_000_000L, minBodyBytesPerSecond, System::nanoTime,
-                () -> BodyProblems.tooSlow("the request body arrived at less than " + minBodyBytesPerSecond
+        return new MeteredInputStream(raw, new BodyPace(bodyTimeoutMillis * 1_000_000L, minBodyBytesPerSecond,
+                System::nanoTime, () -> BodyProblems.tooSlow("the request body arrived at less than " + minBodyBytesPerSecond
                         + " bytes/s after " + bodyTimeoutMillis + " ms (" + ServiceConfig.PREFIX
-                        + "MIN_BODY_BYTES_PER_SECOND)"));
+                        + "MIN_BODY_BYTES_PER_SECOND)")));
     }
 
     /**

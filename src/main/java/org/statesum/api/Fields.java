@@ -50,8 +50,13 @@ final class Fields {
 
     void throwIfAny() {
         if (!errors.isEmpty()) {
-            throw ProblemException.invalid(new ArrayList<>(errors.values()), unlisted);
+            throw problem();
         }
+    }
+
+    /** The 422 naming the problems collected (at least one). */
+    ProblemException problem() {
+        return ProblemException.invalid(new ArrayList<>(errors.values()), unlisted);
     }
 
     /** Escapes a member name as one RFC 6901 reference token. */

@@ -44,8 +44,7 @@ final class FiniteNumbers {
                 // Anything else the endpoint says about a request with holes in it is beside the point.
             }
         }
-        bad.throwIfAny();
-        throw new IllegalStateException("unreachable: problems were found");
+        throw bad.problem();
     }
 
     /** Whether every number in {@code node} is a finite double (no pointers built: the usual case). */

@@ -252,25 +252,42 @@ public final class EosFit {
         return new ArrayRealVector(q, false);
     }
 
-    /** The model values and a central-difference Jacobian (steps of 1e-6 relative: error ~1e-12 relative). */
+    /** The model values and a central-difference Jacobian. */
     private static Pair<RealVector, RealMatrix> model(EquationOfState eos, double[] v, RealVector point) {
         double[] p = point.toArray();
-        int n = v.length;
-        double[] values = new double[n];
-        double[][] jac = new double[n][4];
-        for (int i = 0; i < n; i++) {
+        return new Pair<>(new ArrayRealVector(energies(eos, v, p), false),
+                new Array2DRowRealMatrix(centralDifferences(q -> energies(eos, v, q), p), false));
+    }
+
+    private static double[] energies(EquationOfState eos, double[] v, double[] p) {
+        double[] values = new double[v.length];
+        for (int i = 0; i < v.length; i++) {
             values[i] = eos.energy(v[i], p);
         }
-        for (int k = 0; k < 4; k++) {
+        return values;
+    }
+
+    /**
+     * d f_i / d p_k by central differences, [output][parameter], with steps of 1e-6 relative (at least
+     * 1e-9 absolute): truncation and rounding errors of about 1e-12 relative for these smooth forms.
+     */
+    static double[][] centralDifferences(java.util.function.Function<double[], double[]> f, double[] p) {
+        double[][] d = null;
+        for (int k = 0; k < p.length; k++) {
             double h = 1e-6 * Math.max(Math.abs(p[k]), 1e-3);
             double[] up = p.clone();
             double[] down = p.clone();
             up[k] += h;
             down[k] -= h;
-            for (int i = 0; i < n; i++) {
-                jac[i][k] = (eos.energy(v[i], up) - eos.energy(v[i], down)) / (2 * h);
+            double[] fu = f.apply(up);
+            double[] fd = f.apply(down);
+            if (d == null) {
+                d = new double[fu.length][p.length];
+            }
+            for (int i = 0; i < fu.length; i++) {
+                d[i][k] = (fu[i] - fd[i]) / (2 * h);
             }
         }
-        return new Pair<>(new ArrayRealVector(values, false), new Array2DRowRealMatrix(jac, false));
+        return d;
     }
 }

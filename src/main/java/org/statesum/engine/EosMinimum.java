@@ -51,19 +51,7 @@ public record EosMinimum(double volume, double volumeBound, double bulkModulus, 
         }
         double[][] a = fit.sensitivity();
         int n = a[0].length;
-        double[][] gradient = new double[4][4];
-        for (int k = 0; k < 4; k++) {
-            double h = 1e-6 * Math.max(Math.abs(p[k]), 1e-3);
-            double[] up = p.clone();
-            double[] down = p.clone();
-            up[k] += h;
-            down[k] -= h;
-            double[] au = answers(fit.equationOfState(), up, pn);
-            double[] ad = answers(fit.equationOfState(), down, pn);
-            for (int q = 0; q < 4; q++) {
-                gradient[q][k] = (au[q] - ad[q]) / (2 * h);
-            }
-        }
+        double[][] gradient = EosFit.centralDifferences(q -> answers(fit.equationOfState(), q, pn), p);
         // A first-order estimate, doubled as every other bound here: on a synthetic crystal whose exact answer
         // is known (QuasiHarmonicModelTest) the true error reaches 1.3 times the undoubled estimate.
         double residual = 2 * fit.maxAbsoluteResidual() / es;

@@ -1,9 +1,5 @@
 package org.statesum.models.reaction;
 
-import java.util.LinkedHashMap;
-import java.util.Map;
-import org.statesum.engine.Series;
-import org.statesum.models.Quantity;
 import org.statesum.models.ThermoResult;
 import org.statesum.models.solid.Crystal;
 import org.statesum.models.solid.CrystalModel;
@@ -18,12 +14,8 @@ public record CrystalThermo(Crystal crystal) implements SpeciesThermo {
 
     @Override
     public ThermoResult at(double[] temperaturesKelvin) {
-        ThermoResult r = CrystalModel.evaluate(crystal, temperaturesKelvin, false);
-        Map<Quantity, Series> series = new LinkedHashMap<>(r.series());
-        series.put(Quantity.GIBBS_ENERGY, CrystalModel.gibbsEnergy(crystal, temperaturesKelvin));
-        series.put(Quantity.ENTHALPY, r.series().get(Quantity.INTERNAL_ENERGY));
-        series.put(Quantity.ISOBARIC_HEAT_CAPACITY, r.series().get(Quantity.ISOCHORIC_HEAT_CAPACITY));
-        return new ThermoResult(r.temperaturesKelvin(), series, r.precision(), r.warnings(), null);
+        // per formula unit, where F is also CrystalModel.gibbsEnergy: one evaluation gives both
+        return WithoutPv.of(CrystalModel.evaluate(crystal, temperaturesKelvin, false));
     }
 
     @Override

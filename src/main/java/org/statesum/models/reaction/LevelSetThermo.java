@@ -1,12 +1,8 @@
 package org.statesum.models.reaction;
 
-import java.util.LinkedHashMap;
-import java.util.Map;
 import org.statesum.engine.LevelSet;
-import org.statesum.engine.Series;
 import org.statesum.models.LevelSetModel;
 import org.statesum.models.Particles;
-import org.statesum.models.Quantity;
 import org.statesum.models.ThermoResult;
 
 /**
@@ -21,12 +17,7 @@ public record LevelSetThermo(LevelSet levels, Particles particles) implements Sp
     @Override
     public ThermoResult at(double[] temperaturesKelvin) {
         Particles perParticle = new Particles(particles.count(), particles.statistics(), true);
-        ThermoResult r = LevelSetModel.evaluate(levels, temperaturesKelvin, perParticle, false);
-        Map<Quantity, Series> series = new LinkedHashMap<>(r.series());
-        series.put(Quantity.GIBBS_ENERGY, r.series().get(Quantity.HELMHOLTZ_ENERGY));
-        series.put(Quantity.ENTHALPY, r.series().get(Quantity.INTERNAL_ENERGY));
-        series.put(Quantity.ISOBARIC_HEAT_CAPACITY, r.series().get(Quantity.ISOCHORIC_HEAT_CAPACITY));
-        return new ThermoResult(r.temperaturesKelvin(), series, r.precision(), r.warnings(), null);
+        return WithoutPv.of(LevelSetModel.evaluate(levels, temperaturesKelvin, perParticle, false));
     }
 
     @Override

@@ -10,14 +10,15 @@ import java.io.InputStream;
 import java.util.concurrent.atomic.AtomicLong;
 import org.junit.jupiter.api.Test;
 
-class PacedInputStreamTest {
+/** A body read through {@link MeteredInputStream} held to {@link BodyPace}. */
+class BodyPaceTest {
 
     private static final long SECOND = 1_000_000_000L;
 
     /** A stream of {@code n} bytes read through a pace of 100 bytes/s after 1 s of grace, on a hand clock. */
     private static InputStream paced(int n, AtomicLong clock) {
-        return new PacedInputStream(new ByteArrayInputStream(new byte[n]), SECOND, 100, clock::get,
-                () -> new IllegalStateException("too slow"));
+        return new MeteredInputStream(new ByteArrayInputStream(new byte[n]),
+                new BodyPace(SECOND, 100, clock::get, () -> new IllegalStateException("too slow")));
     }
 
     @Test
@@ -54,8 +55,8 @@ class PacedInputStreamTest {
     @Test
     void theBytesPassThroughUnchanged() throws IOException {
         byte[] data = {1, 2, 3, 4, 5};
-        InputStream in = new PacedInputStream(new ByteArrayInputStream(data), SECOND, 1, () -> 0L,
-                IllegalStateException::new);
+        InputStream in = new MeteredInputStream(new ByteArrayInputStream(data),
+                new BodyPace(SECOND, 1, () -> 0L, IllegalStateException::new));
         assertArrayEquals(data, in.readAllBytes());
     }
 }
