@@ -31,12 +31,13 @@ final class QuasiHarmonicController implements ComputeEndpoint {
                 job.pressuresPascal(), job.perAtom());
         EnergyUnit unit = job.outputUnit();
         Map<String, Object> out = new LinkedHashMap<>();
-        out.put("temperature", Map.of("unit", "K", "values", result.temperaturesKelvin()));
+        out.put("temperature", ThermoResponse.measure("K", "values", result.temperaturesKelvin()));
         List<Map<String, Object>> states = new ArrayList<>();
         double pressureScale = job.pressureUnit().pascalsPerUnit();
         for (PressureState s : result.states()) {
             Map<String, Object> state = new LinkedHashMap<>();
-            state.put("pressure", Map.of("unit", job.pressureUnit().symbol(), "value", s.pressurePascal() / pressureScale));
+            state.put("pressure", ThermoResponse.measure(job.pressureUnit().symbol(), "value",
+                    s.pressurePascal() / pressureScale));
             for (Map.Entry<Quantity, Series> e : s.thermo().entrySet()) {
                 state.put(ThermoResponse.wireName(e.getKey()), ThermoResponse.series(e.getKey(), e.getValue(), unit));
             }

@@ -43,7 +43,7 @@ final class SampledResponse {
             String unit = job.outputUnit().symbol();
             Map<String, Object> energies = vector(unit, scale, estimate.values(), estimate.uncertainties(),
                     estimate.errorBounds());
-            energies.put("temperature", Map.of("unit", "K", "value", job.temperatureKelvin()));
+            energies.put("temperature", ThermoResponse.measure("K", "value", job.temperatureKelvin()));
             body.put("freeEnergies", energies);
             body.put("freeEnergyDifferences", matrix(unit, scale, estimate.differences(),
                     estimate.differenceUncertainties(), estimate.differenceErrorBounds()));

@@ -32,11 +32,7 @@ final class ThermoResponse {
     static Map<String, Object> of(ThermoResult result, EnergyUnit unit, Map<String, Object> system,
             double particlesPerEntity) {
         Map<String, Object> body = new LinkedHashMap<>();
-        // ordered like every series ("unit", then "values"): Map.of's order changes from one JVM to the next
-        Map<String, Object> temperature = new LinkedHashMap<>();
-        temperature.put("unit", "K");
-        temperature.put("values", result.temperaturesKelvin());
-        body.put("temperature", temperature);
+        body.put("temperature", measure("K", "values", result.temperaturesKelvin()));
         double perParticle = unit.molar() ? 1.0 / particlesPerEntity : 1.0;
         for (Map.Entry<Quantity, Series> entry : result.series().entrySet()) {
             Series converted = converted(entry.getKey(), entry.getValue(), unit);
@@ -63,6 +59,18 @@ final class ThermoResponse {
     }
 
     /** Every series of a map, by wire name, in the output unit (as in the main answer). */
+    /**
+     * {@code {"unit": unit, name: value}} in that order, like every series. Answers are built from ordered
+     * maps only: Map.of's order changes from one JVM to the next, and the same request must give the same
+     * bytes.
+     */
+    static Map<String, Object> measure(String unit, String name, Object value) {
+        Map<String, Object> measure = new LinkedHashMap<>();
+        measure.put("unit", unit);
+        measure.put(name, value);
+        return measure;
+    }
+
     static Map<String, Object> seriesMap(Map<Quantity, Series> series, EnergyUnit unit) {
         Map<String, Object> out = new LinkedHashMap<>();
         series.forEach((quantity, si) -> out.put(wireName(quantity),
