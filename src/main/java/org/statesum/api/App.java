@@ -6,6 +6,23 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
 import java.util.Map;
+import org.statesum.api.batch.BatchController;
+import org.statesum.api.config.ServiceConfig;
+import org.statesum.api.constants.ConstantsController;
+import org.statesum.api.gas.IdealGasController;
+import org.statesum.api.reaction.ReactionController;
+import org.statesum.api.request.ComputeEndpoint;
+import org.statesum.api.request.JsonSupport;
+import org.statesum.api.request.ProblemMapper;
+import org.statesum.api.sampled.SampledController;
+import org.statesum.api.server.BodyReader;
+import org.statesum.api.server.ComputeRoutes;
+import org.statesum.api.server.Operations;
+import org.statesum.api.server.ProtocolErrors;
+import org.statesum.api.server.ReadRoutes;
+import org.statesum.api.solid.CrystalController;
+import org.statesum.api.solid.QuasiHarmonicController;
+import org.statesum.api.spectrum.SpectrumController;
 
 /** Builds the statesum HTTP application; {@code App.create(config).start()} serves it. */
 public final class App {
@@ -43,6 +60,7 @@ public final class App {
             // SampledBodyParser); in a batch, where the job body is a tree already, it reads the tree.
             operations.install(javalin, compute, Map.of("/v1/sampled",
                     (ctx, ticket) -> sampled.answer(bodies.openStreamed(ctx, ticket))));
+            BatchController.install(javalin, mapper, bodies, compute, operations, problems);
             ReadRoutes.add(javalin, problems, "/v1/constants", constants::get);
             ReadRoutes.add(javalin, problems, "/openapi.yaml", ctx -> ctx.contentType("application/yaml").result(openApi));
         });

@@ -18,8 +18,9 @@ import org.junit.jupiter.api.Test;
 
 /**
  * The layering, read from the source files: dependencies point api -> models -> engine, units is used
- * by all and uses none of them, only api touches HTTP and JSON, and every package documents itself in
- * a package-info.java.
+ * by all and uses none of them, only api touches HTTP and JSON, every package documents itself in a
+ * package-info.java, and inside api each room imports only the rooms its row below allows (endpoint
+ * rooms never one another; the server machinery no endpoint).
  */
 class ArchitectureTest {
 
@@ -86,6 +87,63 @@ class ArchitectureTest {
     void unitsUseNoOtherPackage() {
         assertEquals(List.of(), references("units",
                 List.of("org.statesum.api", "org.statesum.models", "org.statesum.engine")));
+    }
+
+    private static final Path API = MAIN.resolve("api");
+    private static final Pattern API_REFERENCE = Pattern.compile("\\borg\\.statesum\\.api\\.([a-z]+)\\.");
+    /** The rooms of api and the rooms each may import; the assembly (api itself) may import every room. */
+    private static final Map<String, List<String>> ROOM_IMPORTS = Map.ofEntries(
+            Map.entry("config", List.of()),
+            Map.entry("request", List.of("config")),
+            Map.entry("server", List.of("config", "request")),
+            Map.entry("species", List.of("config", "request")),
+            Map.entry("spectrum", List.of("config", "request", "species")),
+            Map.entry("gas", List.of("config", "request", "species")),
+            Map.entry("solid", List.of("config", "request", "species")),
+            Map.entry("reaction", List.of("config", "request", "species")),
+            Map.entry("sampled", List.of("config", "request", "species")),
+            Map.entry("constants", List.of("config", "request", "species")),
+            Map.entry("batch", List.of("config", "request", "species", "server")));
+
+    @Test
+    void everyApiRoomImportsOnlyWhatItsRowAllows() throws IOException {
+        List<String> found = new ArrayList<>();
+        List<String> rooms = new ArrayList<>();
+        try (Stream<Path> files = Files.walk(API)) {
+            for (Path file : files.filter(p -> p.toString().endsWith(".java")).toList()) {
+                Path relative = API.relativize(file);
+                if (relative.getNameCount() == 1) {
+                    continue; // the assembly
+                }
+                String room = relative.getName(0).toString();
+                rooms.add(room);
+                List<String> allowed = ROOM_IMPORTS.get(room);
+                if (allowed == null) {
+                    found.add(relative + ": a room missing from ROOM_IMPORTS (add its row)");
+                    continue;
+                }
+                Matcher m = API_REFERENCE.matcher(Files.readString(file));
+                while (m.find()) {
+                    if (!m.group(1).equals(room) && !allowed.contains(m.group(1))) {
+                        found.add(relative + ": " + m.group(1));
+                    }
+                }
+            }
+        }
+        assertEquals(List.of(), found);
+        assertTrue(rooms.containsAll(ROOM_IMPORTS.keySet()), "every room in the table exists: " + rooms);
+    }
+
+    @Test
+    void testsMirrorTheApiRooms() throws IOException {
+        Path tests = Path.of("src", "test", "java", "org", "statesum", "api");
+        List<String> strays = new ArrayList<>();
+        try (Stream<Path> files = Files.walk(tests)) {
+            files.filter(p -> p.toString().endsWith(".java")).map(tests::relativize)
+                    .filter(p -> p.getNameCount() > 1 && !ROOM_IMPORTS.containsKey(p.getName(0).toString()))
+                    .forEach(p -> strays.add(p.toString()));
+        }
+        assertEquals(List.of(), strays, "test folders under api name rooms of the main code");
     }
 
     @Test

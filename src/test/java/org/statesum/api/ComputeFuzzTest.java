@@ -22,11 +22,15 @@ import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.ShrinkingMode;
 import net.jqwik.api.lifecycle.AfterContainer;
+import org.statesum.api.config.ServiceConfig;
+import org.statesum.api.server.Operations;
+import org.statesum.testing.BodyMutator;
 import org.statesum.testing.ContractValidator;
+import org.statesum.testing.OpsFixtures;
 import org.statesum.testing.TestServer;
 
 /**
- * Throws generated and mutated bodies at every compute endpoint registered in {@link ComputeRoutes}
+ * Throws generated and mutated bodies at every compute endpoint registered in {@link org.statesum.api.server.ComputeRoutes}
  * and at the batch endpoint
  * (2 000 tries, one body per endpoint per try): no answer is a 5xx, every 4xx is a problem naming
  * its fields by JSON Pointer, every answer matches the contract, and the service still answers a

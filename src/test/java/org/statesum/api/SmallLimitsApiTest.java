@@ -7,6 +7,7 @@ import io.restassured.response.Response;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.statesum.api.config.ServiceConfig;
 import org.statesum.testing.TestServer;
 
 /** A server started with small limits applies each of them, and says which one was hit. */

@@ -5,7 +5,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.statesum.api.App;
-import org.statesum.api.ServiceConfig;
+import org.statesum.api.config.ServiceConfig;
 
 /**
  * The two servers of {@code bench/load.sh}, in one JVM so that both see the same JIT, GC and heap:

@@ -17,7 +17,7 @@ import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
 import org.statesum.api.App;
-import org.statesum.api.ServiceConfig;
+import org.statesum.api.config.ServiceConfig;
 import org.statesum.engine.EquationOfState;
 
 /**
@@ -42,8 +42,8 @@ public class QuasiHarmonicBenchmark {
 
     private JsonNode quasiHarmonic;
     private JsonNode crystal;
-    private org.statesum.api.ComputeEndpoint qhaEndpoint;
-    private org.statesum.api.ComputeEndpoint crystalEndpoint;
+    private org.statesum.api.request.ComputeEndpoint qhaEndpoint;
+    private org.statesum.api.request.ComputeEndpoint crystalEndpoint;
 
     @Setup
     public void setUp() {

@@ -12,7 +12,7 @@ import io.restassured.path.json.config.JsonPathConfig;
 import io.restassured.specification.RequestSpecification;
 import java.util.List;
 import org.statesum.api.App;
-import org.statesum.api.ServiceConfig;
+import org.statesum.api.config.ServiceConfig;
 
 /**
  * The real application on a free port, with every answer it gives checked against the OpenAPI
