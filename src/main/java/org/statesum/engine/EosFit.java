@@ -1,5 +1,11 @@
 package org.statesum.engine;
 
+import org.apache.commons.math3.exception.ConvergenceException;
+import org.apache.commons.math3.exception.TooManyEvaluationsException;
+import org.apache.commons.math3.exception.TooManyIterationsException;
+import org.apache.commons.math3.fitting.leastsquares.LeastSquaresBuilder;
+import org.apache.commons.math3.fitting.leastsquares.LeastSquaresProblem;
+import org.apache.commons.math3.fitting.leastsquares.LevenbergMarquardtOptimizer;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.ArrayRealVector;
 import org.apache.commons.math3.linear.LUDecomposition;
@@ -9,7 +15,7 @@ import org.apache.commons.math3.util.Pair;
 
 /**
  * A least-squares fit of an {@link EquationOfState} to sampled energies E_i at volumes V_i, by
- * Levenberg-Marquardt (K. Levenberg, Q. Appl. Math. 2 (1944) 164; D. W. Marquardt, 1963) in
+ * Levenberg-Marquardt (K. Levenberg, Q. Appl. Math. 2 (1944) 164; D. W. Marquardt, 1963; commons-math3's optimiser) in
  * normalised units (V / mean V, E scaled to the sampled span), started from a parabola through the data
  * or from a given start (the previous temperature's answer). Units in and out are the caller's own
  * (energy, volume, energy / volume), always consistent.
@@ -149,83 +155,30 @@ public final class EosFit {
     }
 
     /**
-     * Levenberg-Marquardt with Marquardt's diagonal scaling (D. W. Marquardt, J. SIAM 11 (1963) 431): solve
-     * (J^T J + lambda diag(J^T J)) d = -J^T r, accept d if the cost falls (lambda / 10), else lambda x 10.
-     * Stops when a step changes no parameter by more than {@link #STEP_TOLERANCE} relative (or by 1e-8 while
-     * lowering the cost by under 1e-14 of itself), or when no damping up to 1e12 lowers the cost any more (a
-     * minimum to working precision); after {@link #MAX_ITERATIONS} it returns the best point found.
+     * Levenberg-Marquardt as commons-math3 implements it (after MINPACK's lmder: J. J. More, Lecture Notes
+     * in Mathematics 630 (1978) 105), with the parameters held in range after each step
+     * ({@link #keepInRange}). Converged when the relative cost reduction, the relative parameter step or the
+     * orthogonality of residuals and Jacobian falls below {@link #STEP_TOLERANCE}; out of iterations
+     * (typically crawling along a clamped B0') it returns null.
      */
     private static double[] levenbergMarquardt(EquationOfState eos, double[] v, double[] e, double[] start) {
-        double[] p = keepInRange(new ArrayRealVector(start, false)).toArray();
-        double cost = cost(eos, v, e, p);
-        double lambda = 1e-3;
-        for (int iteration = 0; iteration < MAX_ITERATIONS; iteration++) {
-            Pair<RealVector, RealMatrix> m = model(eos, v, new ArrayRealVector(p, false));
-            double[][] j = m.getSecond().getData();
-            double[] r = m.getFirst().toArray();
-            double[][] a = new double[4][4];
-            double[] g = new double[4];
-            for (int i = 0; i < v.length; i++) {
-                double ri = r[i] - e[i];
-                for (int k = 0; k < 4; k++) {
-                    g[k] -= j[i][k] * ri;
-                    for (int l = 0; l < 4; l++) {
-                        a[k][l] += j[i][k] * j[i][l];
-                    }
-                }
-            }
-            while (true) {
-                double[][] damped = new double[4][];
-                for (int k = 0; k < 4; k++) {
-                    damped[k] = a[k].clone();
-                    damped[k][k] += lambda * a[k][k];
-                }
-                LUDecomposition lu = new LUDecomposition(new Array2DRowRealMatrix(damped, false), 1e-300);
-                if (!lu.getSolver().isNonSingular()) {
-                    return null;
-                }
-                double[] step = lu.getSolver().solve(new ArrayRealVector(g, false)).toArray();
-                double[] trial = p.clone();
-                for (int k = 0; k < 4; k++) {
-                    trial[k] += step[k];
-                }
-                trial = keepInRange(new ArrayRealVector(trial, false)).toArray();
-                double trialCost = cost(eos, v, e, trial);
-                if (trialCost < cost) {
-                    double largest = 0;
-                    for (int k = 0; k < 4; k++) {
-                        largest = Math.max(largest, Math.abs(trial[k] - p[k]) / Math.max(Math.abs(p[k]), 1e-3));
-                    }
-                    // Converged: a negligible step, or a small one that no longer lowers the cost measurably.
-                    boolean small = largest <= STEP_TOLERANCE
-                            || (largest <= 1e-8 && cost - trialCost <= 1e-14 * cost);
-                    p = trial;
-                    cost = trialCost;
-                    lambda = Math.max(lambda / 10, 1e-12);
-                    if (small) {
-                        return p;
-                    }
-                    break;
-                }
-                lambda *= 10;
-                if (lambda > 1e12) {
-                    // No descent left at any damping: the point is a minimum to working precision.
-                    return p;
-                }
-            }
+        LeastSquaresProblem problem = new LeastSquaresBuilder()
+                .start(keepInRange(new ArrayRealVector(start, false)))
+                .model(point -> model(eos, v, point))
+                .target(e)
+                .parameterValidator(EosFit::keepInRange)
+                .maxIterations(MAX_ITERATIONS)
+                .maxEvaluations(MAX_ITERATIONS * 10)
+                .build();
+        LevenbergMarquardtOptimizer optimizer = new LevenbergMarquardtOptimizer()
+                .withCostRelativeTolerance(STEP_TOLERANCE)
+                .withParameterRelativeTolerance(STEP_TOLERANCE)
+                .withOrthoTolerance(STEP_TOLERANCE);
+        try {
+            return optimizer.optimize(problem).getPoint().toArray();
+        } catch (TooManyEvaluationsException | TooManyIterationsException | ConvergenceException notConverged) {
+            return null;
         }
-        // Out of iterations (typically crawling along a clamped B0'): the best point found; its residuals
-        // will tell the caller how good it is.
-        return p;
-    }
-
-    private static double cost(EquationOfState eos, double[] v, double[] e, double[] p) {
-        double c = 0;
-        for (int i = 0; i < v.length; i++) {
-            double r = eos.energy(v[i], p) - e[i];
-            c += r * r;
-        }
-        return Double.isNaN(c) ? Double.POSITIVE_INFINITY : c;
     }
 
     private static double[] parabolaStart(double[] v, double[] e) {
