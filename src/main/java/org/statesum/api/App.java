@@ -51,6 +51,9 @@ public final class App {
             javalin.startup.showJavalinBanner = false;
             javalin.startup.showOldJavalinVersionWarning = false;
             javalin.jetty.port = config.port();
+            if (!config.operations().host().isEmpty()) {
+                javalin.jetty.host = config.operations().host();
+            }
             javalin.http.maxRequestSize = config.maxBodyBytes();
             javalin.http.prefer405over404 = true;
             problems.register(javalin);
@@ -58,8 +61,7 @@ public final class App {
             javalin.jetty.modifyServer(server -> server.setErrorHandler(new ProtocolErrors(mapper)));
             // /v1/sampled is streamed rather than parsed into a tree: its matrices reach 1e7 numbers (see
             // SampledBodyParser); in a batch, where the job body is a tree already, it reads the tree.
-            operations.install(javalin, compute, Map.of("/v1/sampled",
-                    (ctx, ticket) -> sampled.answer(bodies.openStreamed(ctx, ticket))));
+            operations.install(javalin, compute, Map.of("/v1/sampled", sampled::answer));
             BatchController.install(javalin, mapper, bodies, compute, operations, problems);
             ReadRoutes.add(javalin, problems, "/v1/constants", constants::get);
             ReadRoutes.add(javalin, problems, "/openapi.yaml", ctx -> ctx.contentType("application/yaml").result(openApi));

@@ -18,6 +18,7 @@ import java.util.regex.Pattern;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.statesum.api.config.OperationsConfig;
 import org.statesum.testing.ContractValidator;
 
 /**
@@ -97,13 +98,19 @@ class DeploymentFilesTest {
         assertEquals("Deployment", scaled.path("kind").asText());
         assertEquals(deployment.at("/metadata/name").asText(), scaled.path("name").asText());
         int grace = deployment.at("/spec/template/spec/terminationGracePeriodSeconds").asInt();
-        long drainMillis = 20_000;
+        long drainMillis = OperationsConfig.defaults().shutdownGraceMillis();
+        long timeLimitMillis = OperationsConfig.defaults().timeLimitMillis();
         for (JsonNode env : container().path("env")) {
             if (env.path("name").asText().equals("STATESUM_SHUTDOWN_GRACE_MS")) {
                 drainMillis = Long.parseLong(env.path("value").asText());
             }
+            if (env.path("name").asText().equals("STATESUM_TIME_LIMIT_MS")) {
+                timeLimitMillis = Long.parseLong(env.path("value").asText());
+            }
         }
-        assertTrue(grace * 1000L > drainMillis + 5_000, "the pod's grace period covers preStop and the drain");
+        // preStop (5 s), the drain, then the cancelled work's answers (Lifecycle.CANCEL_WAIT_MILLIS, 5 s)
+        assertTrue(grace * 1000L > 5_000 + drainMillis + 5_000, "the pod's grace period covers preStop and the drain");
+        assertTrue(drainMillis > timeLimitMillis, "a direct job admitted before SIGTERM can finish within the drain");
     }
 
     @Test

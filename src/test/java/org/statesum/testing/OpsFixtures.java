@@ -55,6 +55,33 @@ public final class OpsFixtures {
                 .POST(HttpRequest.BodyPublishers.ofString(body)).build(), HttpResponse.BodyHandlers.ofString());
     }
 
+    /**
+     * Sends {@code request} as it is on a new connection and returns the whole answer, as ISO-8859-1
+     * text, read until the server closes or 2 s pass without a byte.
+     */
+    public static String raw(int port, String request) throws IOException {
+        return raw(port, request.getBytes(java.nio.charset.StandardCharsets.ISO_8859_1));
+    }
+
+    public static String raw(int port, byte[] request) throws IOException {
+        try (java.net.Socket socket = new java.net.Socket("localhost", port)) {
+            socket.setSoTimeout(2_000);
+            socket.getOutputStream().write(request);
+            socket.getOutputStream().flush();
+            java.io.InputStream in = socket.getInputStream();
+            java.io.ByteArrayOutputStream answer = new java.io.ByteArrayOutputStream();
+            byte[] buffer = new byte[8192];
+            try {
+                for (int n; (n = in.read(buffer)) > 0; ) {
+                    answer.write(buffer, 0, n);
+                }
+            } catch (java.net.SocketTimeoutException e) {
+                // a kept-alive connection: what arrived is the answer
+            }
+            return answer.toString(java.nio.charset.StandardCharsets.ISO_8859_1);
+        }
+    }
+
     /** Polls until the condition holds or the timeout passes; returns whether it held. */
     public static boolean eventually(Duration timeout, Check check) throws Exception {
         long end = System.nanoTime() + timeout.toNanos();

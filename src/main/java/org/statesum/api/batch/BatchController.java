@@ -78,8 +78,9 @@ public final class BatchController {
     }
 
     public void post(Context ctx) throws InterruptedException {
-        try (ComputeGate.Ticket ticket = gate.admit()) {
+        try (ComputeGate.Ticket ticket = gate.open(ctx.req().getRemoteAddr())) {
             List<BatchJob> jobs = requests.read(bodies.read(ctx, ticket));
+            ticket.admit();
             long deadline = System.nanoTime() + ops.batchTimeLimitMillis() * 1_000_000L;
             ctx.status(200).contentType(MEDIA_TYPE);
             stream(ctx, jobs, ticket, deadline);

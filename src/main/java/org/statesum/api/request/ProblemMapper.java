@@ -4,6 +4,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import io.javalin.config.JavalinConfig;
 import io.javalin.http.Context;
 import io.javalin.http.HttpResponseException;
+import java.util.Collections;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
@@ -38,6 +39,12 @@ public final class ProblemMapper {
     public String allow(String method, String path) {
         allowed.computeIfAbsent(path, p -> new ConcurrentSkipListSet<>()).add(method);
         return path;
+    }
+
+    /** The methods {@code path} serves, in alphabetical order; empty for a path that serves nothing. */
+    public Set<String> methods(String path) {
+        Set<String> methods = allowed.get(path);
+        return methods == null ? Set.of() : Collections.unmodifiableSet(methods);
     }
 
     public void register(JavalinConfig config) {

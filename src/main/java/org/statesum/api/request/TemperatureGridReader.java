@@ -42,7 +42,15 @@ public final class TemperatureGridReader {
                 checkOne(node.get(i).doubleValue(), pointer + "/" + i, fields);
             }
         }
-        return fields.count() > before ? Optional.empty() : values;
+        return fields.count() > before ? Optional.empty() : values.map(TemperatureGridReader::withoutNegativeZero);
+    }
+
+    /** -0.0 K is the temperature 0 K: answers echo it as 0.0 (x + 0.0 turns -0.0 into +0.0, IEEE 754). */
+    private static double[] withoutNegativeZero(double[] grid) {
+        for (int j = 0; j < grid.length; j++) {
+            grid[j] += 0.0;
+        }
+        return grid;
     }
 
     private static Optional<double[]> readRange(JsonNode node, String pointer, int max, Fields fields) {
@@ -76,7 +84,7 @@ public final class TemperatureGridReader {
             // a + j (b - a) / (n - 1), with the end point exact.
             grid[j] = j == n - 1 ? b : a + (b - a) * j / (n - 1);
         }
-        return Optional.of(grid);
+        return Optional.of(withoutNegativeZero(grid));
     }
 
     private static void checkOne(double t, String pointer, Fields fields) {

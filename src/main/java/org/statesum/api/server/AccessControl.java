@@ -9,6 +9,7 @@ import org.statesum.api.config.OperationsConfig;
 import org.statesum.api.request.FieldError;
 import org.statesum.api.request.Problem;
 import org.statesum.api.request.ProblemException;
+import org.statesum.api.request.ProblemMapper;
 
 /**
  * Runs before every route: answers CORS preflights, adds CORS headers for allowed browser origins
@@ -20,8 +21,7 @@ import org.statesum.api.request.ProblemException;
 public final class AccessControl {
 
     private static final Set<String> OPEN_PATHS = Set.of("/health/live", "/health/ready");
-    private static final String ALLOW_METHODS = "GET, POST, OPTIONS";
-    private static final String ALLOW_HEADERS = "Authorization, Content-Type, X-Request-Id";
+    private static final String ALLOW_HEADERS = "Authorization, Content-Type, Content-Encoding, X-Request-Id";
     private static final String EXPOSE_HEADERS = "X-Request-Id, Retry-After";
     /** How long a browser may cache a preflight answer, s (common practice: minutes, not days). */
     private static final String PREFLIGHT_MAX_AGE_SECONDS = "600";
@@ -29,11 +29,14 @@ public final class AccessControl {
     private final BearerTokens tokens;
     private final List<String> origins;
     private final ServiceMetrics metrics;
+    private final ProblemMapper problems;
 
-    AccessControl(OperationsConfig ops, ServiceMetrics metrics) {
+    /** @param problems knows the methods each path serves (the Allow of an OPTIONS answer) */
+    AccessControl(OperationsConfig ops, ServiceMetrics metrics, ProblemMapper problems) {
         this.tokens = ops.tokens();
         this.origins = ops.corsOrigins();
         this.metrics = metrics;
+        this.problems = problems;
     }
 
     void before(Context ctx) {
@@ -53,18 +56,27 @@ public final class AccessControl {
         }
     }
 
+    /**
+     * OPTIONS on a path: 404 where nothing is served, else 204 with the path's own methods in
+     * {@code Allow} (RFC 9110, section 9.3.7) and, for an allowed origin, the CORS preflight headers.
+     */
     private void preflight(Context ctx, String origin, boolean allowedOrigin) {
+        Set<String> methods = problems.methods(ctx.path());
+        if (methods.isEmpty()) {
+            throw new ProblemException(ProblemMapper.fromStatus(404));
+        }
+        String allow = String.join(", ", methods) + ", OPTIONS";
         if (origin != null && !allowedOrigin) {
             throw new ProblemException(Problem.of("origin-not-allowed", "Origin not allowed", 403,
                     "browser calls from origin '" + origin + "' are not allowed (STATESUM_CORS_ORIGINS)",
                     List.of(new FieldError("", "origin not in the allow-list"))));
         }
         if (allowedOrigin) {
-            ctx.header("Access-Control-Allow-Methods", ALLOW_METHODS);
+            ctx.header("Access-Control-Allow-Methods", allow);
             ctx.header("Access-Control-Allow-Headers", ALLOW_HEADERS);
             ctx.header("Access-Control-Max-Age", PREFLIGHT_MAX_AGE_SECONDS);
         }
-        ctx.header("Allow", ALLOW_METHODS);
+        ctx.header("Allow", allow);
         ctx.status(204);
         ctx.skipRemainingHandlers();
     }

@@ -8,10 +8,10 @@ import java.io.InputStream;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
-import java.util.zip.GZIPInputStream;
 import org.statesum.api.config.ServiceConfig;
 import org.statesum.api.request.BodyProblems;
 import org.statesum.api.request.FieldError;
+import org.statesum.api.request.JsonMediaType;
 import org.statesum.api.request.Problem;
 import org.statesum.api.request.ProblemException;
 
@@ -70,19 +70,24 @@ public final class BodyReader {
     }
 
     /**
-     * The body as a stream for endpoints that parse it incrementally: the media type checked, a gzip
-     * body ({@code Content-Encoding: gzip}) inflated on the fly, and at most the size limit read after
-     * decoding (413 beyond, so a small compressed body cannot expand without bound). Any other
-     * content coding is refused with 415 (RFC 9110, section 15.5.16).
+     * The whole body for endpoints that parse it incrementally from bytes (no tree): the media type
+     * checked, a gzip body ({@code Content-Encoding: gzip}) inflated, and at most the streamed-body
+     * limit read after decoding (413 beyond, so a small compressed body cannot expand without bound);
+     * its memory (the bytes and the arrays parsed from them) reserved on {@code ticket} as it is read.
+     * Any other content coding is refused with 415 (RFC 9110, section 15.5.16).
      */
-    public InputStream openStreamed(Context ctx, ComputeGate.Ticket ticket) {
-        return new MeteredInputStream(open(ctx, streamLimit),
-                bytes -> ticket.reserveBody(bytes, MemoryBudget.STREAMED_FACTOR));
+    public byte[] readStreamed(Context ctx, ComputeGate.Ticket ticket) {
+        try (InputStream in = new MeteredInputStream(open(ctx, streamLimit),
+                bytes -> ticket.reserveBody(bytes, MemoryBudget.STREAMED_FACTOR + 1))) {
+            return in.readAllBytes();
+        } catch (IOException e) {
+            throw BodyProblems.unreadable(e);
+        }
     }
 
     private InputStream open(Context ctx, Limit limit) {
         long maxBodyBytes = limit.bytes();
-        requireJson(ctx.contentType());
+        JsonMediaType.require(ctx.header("Content-Type"));
         try {
             InputStream raw = paced(ctx.req().getInputStream());
             long declared = ctx.contentLength();
@@ -98,7 +103,7 @@ public final class BodyReader {
             String coding = ctx.header("Content-Encoding");
             String name = coding == null ? "identity" : coding.trim().toLowerCase(Locale.ROOT);
             if (name.equals("gzip") || name.equals("x-gzip")) {
-                in = new GZIPInputStream(raw, GZIP_BUFFER_BYTES);
+                in = new StrictGzipInputStream(raw, GZIP_BUFFER_BYTES);
             } else if (!name.equals("identity") && !name.isEmpty()) {
                 throw new ProblemException(Problem.of("unsupported-media-type", "Unsupported content coding", 415,
                         "send the body uncompressed or with Content-Encoding: gzip (got '" + coding + "')",
@@ -181,16 +186,5 @@ public final class BodyReader {
         return new ProblemException(Problem.of("body-too-large", "Request body too large", 413,
                 "the request body exceeds the limit of " + limit.bytes() + " bytes (" + limit.variable() + ")",
                 List.of(new FieldError("", "body larger than " + limit.bytes() + " bytes"))));
-    }
-
-    static void requireJson(String contentType) {
-        int end = contentType == null ? -1 : contentType.indexOf(';');
-        String type = contentType == null ? "" : (end < 0 ? contentType : contentType.substring(0, end)).trim()
-                .toLowerCase(Locale.ROOT);
-        if (!type.equals("application/json")) {
-            throw new ProblemException(Problem.of("unsupported-media-type", "Unsupported media type", 415,
-                    "send the body as application/json (got '" + (contentType == null ? "" : contentType) + "')",
-                    List.of(new FieldError("", "Content-Type must be application/json"))));
-        }
     }
 }

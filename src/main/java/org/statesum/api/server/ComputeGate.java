@@ -1,6 +1,7 @@
 package org.statesum.api.server;
 
 import java.util.List;
+import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.Semaphore;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicInteger;
@@ -8,16 +9,21 @@ import org.statesum.api.config.OperationsConfig;
 import org.statesum.api.request.Problem;
 
 /**
- * Admission and concurrency control for compute work. A request is first admitted (at most
- * {@code maxConcurrentJobs + maxQueuedRequests} at once, else 503 at once: no unbounded queue, and
- * memory bounded by that many bodies), then waits for one of {@code maxConcurrentJobs} compute slots,
- * in arrival order, for at most {@code queueWaitMillis} (else 503). Batch jobs take compute slots from
- * the same pool, so direct and batch work share one bound. Once closed for shutdown, the gate admits
- * nothing more and the work in flight finishes.
+ * Admission and concurrency control for compute work. A request's ticket is opened before its body
+ * is read; the body is then read under the {@link MemoryBudget} and the body pace limits only, and
+ * under a cap of {@code maxBodiesPerClient} bodies being read at once from one client address (429
+ * beyond, at once), so that slow senders cannot hold the compute admissions. Once the body is complete
+ * the request is admitted (at most {@code maxConcurrentJobs + maxQueuedRequests} at once, else 503 at
+ * once: no unbounded queue), then waits for one of {@code maxConcurrentJobs} compute slots, in arrival
+ * order, for at most {@code queueWaitMillis} (else 503). Batch jobs take compute slots from the same
+ * pool, so direct and batch work share one bound.
  *
- * <p>Requests in flight also share a {@link MemoryBudget} for their bodies and answers: a ticket holds
- * the share of its body, reserved as the body is read and given back once the job is computed or the
- * request ends.
+ * <p>Once closed for shutdown the gate opens and admits nothing more and the work in flight goes on;
+ * once {@linkplain #cancel() cancelled} (the grace period is over) the work in flight stops at its next
+ * checkpoint with a 503 {@code shutting-down} problem ({@link JobRunner}).
+ *
+ * <p>A ticket holds the share of the memory budget its body takes, reserved as the body is read and
+ * given back once the job is computed or the request ends.
  */
 public final class ComputeGate {
 
@@ -28,7 +34,10 @@ public final class ComputeGate {
     private final AtomicInteger admitted = new AtomicInteger();
     private final AtomicInteger running = new AtomicInteger();
     private final MemoryBudget memory;
+    /** Bodies being read, by client address (entries removed at zero, so the map holds only readers). */
+    private final ConcurrentHashMap<String, Integer> reading = new ConcurrentHashMap<>();
     private volatile boolean closed;
+    private volatile boolean cancelled;
 
     ComputeGate(OperationsConfig ops, ServiceMetrics metrics) {
         this.ops = ops;
@@ -42,19 +51,32 @@ public final class ComputeGate {
         metrics.gauge("statesum.compute.slots", "compute slots (the concurrency limit)", ops::maxConcurrentJobs);
     }
 
-    /** Admits one request or throws a 503 problem; the caller closes the ticket when done. */
-    public Ticket admit() {
+    /**
+     * Opens a ticket for a request from {@code client} whose body is about to be read, or throws: 503
+     * while shutting down, 429 when that client is already sending {@code maxBodiesPerClient} bodies.
+     * The caller closes the ticket when done.
+     */
+    public Ticket open(String client) {
         if (closed) {
-            throw refused("shutting-down", "Service shutting down",
-                    "the service is shutting down; send the request to another replica");
+            throw shuttingDown();
         }
-        if (!admissions.tryAcquire()) {
-            throw refused("overloaded", "Service overloaded", "the service is at its limit of " + ops.maxConcurrentJobs()
-                    + " running and " + ops.maxQueuedRequests() + " waiting requests (STATESUM_MAX_CONCURRENT_JOBS, "
-                    + "STATESUM_MAX_QUEUED_REQUESTS); try again later");
+        String key = client == null ? "" : client;
+        int cap = ops.maxBodiesPerClient();
+        if (cap > 0 && reading.merge(key, 1, Integer::sum) > cap) {
+            reading.computeIfPresent(key, (k, n) -> n == 1 ? null : n - 1);
+            metrics.rejected("client-limit");
+            throw new OverloadedException(Problem.of("too-many-bodies", "Too many request bodies from one client", 429,
+                    "this client address is already sending " + cap + " request bodies (STATESUM_MAX_BODIES_PER_CLIENT); "
+                            + "finish those before sending more", List.of()), ops.retryAfterSeconds());
         }
-        admitted.incrementAndGet();
-        return new Ticket();
+        return new Ticket(cap > 0 ? key : null);
+    }
+
+    /** Opens a ticket and admits it at once, for work that has no body to read first (tests). */
+    Ticket admit() {
+        Ticket ticket = open(null);
+        ticket.admit();
+        return ticket;
     }
 
     /** Work admitted and not yet finished. */
@@ -71,6 +93,22 @@ public final class ComputeGate {
         return closed;
     }
 
+    /** Stops the work in flight at its next checkpoint (the grace period of a shutdown is over). */
+    void cancel() {
+        closed = true;
+        cancelled = true;
+    }
+
+    boolean cancelled() {
+        return cancelled;
+    }
+
+    /** The 503 of work refused or stopped because the service is shutting down. */
+    OverloadedException shuttingDown() {
+        return refused("shutting-down", "Service shutting down",
+                "the service is shutting down; send the request to another replica");
+    }
+
     /** The 503 of a refused request; {@code reason} is the problem type and the metric's label. */
     private OverloadedException refused(String reason, String title, String detail) {
         metrics.rejected(reason);
@@ -82,12 +120,48 @@ public final class ComputeGate {
         return memory.share();
     }
 
-    /** One admitted request: holds its admission until closed; takes compute slots for its jobs. */
+    /**
+     * One request: counted against its client while its body is read, then admitted (holding its
+     * admission until closed); takes compute slots for its jobs.
+     */
     public final class Ticket implements AutoCloseable {
 
         private boolean open = true;
         /** The share of the memory budget that the request's body takes. */
         private final MemoryBudget.Share body = memory.share();
+        /** The client whose count of bodies being read includes this one, or null once it no longer does. */
+        private String client;
+        private boolean holdsAdmission;
+
+        private Ticket(String client) {
+            this.client = client;
+        }
+
+        /**
+         * Admits the request to compute once its body is complete, or throws a 503 problem when
+         * {@code maxConcurrentJobs + maxQueuedRequests} requests are admitted already.
+         */
+        public void admit() {
+            stopReading();
+            if (closed) {
+                throw shuttingDown();
+            }
+            if (!admissions.tryAcquire()) {
+                throw refused("overloaded", "Service overloaded", "the service is at its limit of "
+                        + ops.maxConcurrentJobs() + " running and " + ops.maxQueuedRequests()
+                        + " waiting requests (STATESUM_MAX_CONCURRENT_JOBS, STATESUM_MAX_QUEUED_REQUESTS); "
+                        + "try again later");
+            }
+            holdsAdmission = true;
+            admitted.incrementAndGet();
+        }
+
+        private void stopReading() {
+            if (client != null) {
+                reading.computeIfPresent(client, (k, n) -> n == 1 ? null : n - 1);
+                client = null;
+            }
+        }
 
         /**
          * Makes sure the ticket holds memory for a body of which {@code bytes} have been read, at
@@ -127,8 +201,11 @@ public final class ComputeGate {
             if (open) {
                 open = false;
                 body.close();
-                admitted.decrementAndGet();
-                admissions.release();
+                stopReading();
+                if (holdsAdmission) {
+                    admitted.decrementAndGet();
+                    admissions.release();
+                }
             }
         }
     }

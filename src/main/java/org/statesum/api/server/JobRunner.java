@@ -16,17 +16,21 @@ import org.statesum.engine.Cancellation;
 /**
  * Runs one compute job (a direct request or a batch job) under its time limit: installs a
  * {@link Cancellation} check that stops the engine between units of work once the deadline has passed
- * (a 422 problem: the job is too large for the limit, so retrying will not help) or once the job is no
- * longer wanted (a client gone: {@link CancellationException}), and records the compute time.
+ * (a 422 problem: the job is too large for the limit, so retrying will not help), once the job is no
+ * longer wanted (a client gone: {@link CancellationException}) or once a shutdown's grace period is over
+ * (a 503 {@code shutting-down} problem, also for a job that had not started), and records the compute
+ * time.
  */
 public final class JobRunner {
 
     private final OperationsConfig ops;
     private final ServiceMetrics metrics;
+    private final ComputeGate gate;
 
-    JobRunner(OperationsConfig ops, ServiceMetrics metrics) {
+    JobRunner(OperationsConfig ops, ServiceMetrics metrics, ComputeGate gate) {
         this.ops = ops;
         this.metrics = metrics;
+        this.gate = gate;
     }
 
     /**
@@ -45,6 +49,9 @@ public final class JobRunner {
         long ownDeadline = start + ops.timeLimitMillis() * 1_000_000L;
         long deadline = ownDeadline - notAfterNanos < 0 ? ownDeadline : notAfterNanos;
         Runnable check = () -> {
+            if (gate.cancelled()) {
+                throw gate.shuttingDown();
+            }
             if (unwanted.getAsBoolean()) {
                 throw new CancellationException("the answer is no longer wanted");
             }
@@ -54,6 +61,7 @@ public final class JobRunner {
         };
         String outcome = "error";
         try {
+            check.run();
             Object answer = Cancellation.during(check, work);
             outcome = "answered";
             return answer;

@@ -7,7 +7,9 @@ import io.javalin.config.JavalinConfig;
 import io.javalin.config.Key;
 import io.javalin.http.Context;
 import jakarta.servlet.DispatcherType;
+import java.io.ByteArrayInputStream;
 import java.io.IOException;
+import java.io.InputStream;
 import java.util.EnumSet;
 import java.util.Map;
 import java.util.Set;
@@ -18,6 +20,7 @@ import java.util.concurrent.atomic.AtomicInteger;
 import java.util.function.BiFunction;
 import java.util.function.Supplier;
 import org.eclipse.jetty.ee10.servlet.FilterHolder;
+import org.eclipse.jetty.http.HttpCompliance;
 import org.statesum.api.config.OperationsConfig;
 import org.statesum.api.config.ServiceConfig;
 import org.statesum.api.request.FiniteNumbers;
@@ -53,7 +56,7 @@ public final class Operations {
         this.problems = problems;
         this.ops = config.operations();
         this.gate = new ComputeGate(ops, metrics);
-        this.runner = new JobRunner(ops, metrics);
+        this.runner = new JobRunner(ops, metrics, gate);
         this.lifecycle = new Lifecycle(gate, metrics.inFlight(), ops);
         this.workers = Executors.newFixedThreadPool(ops.maxConcurrentJobs(), daemonThreads());
     }
@@ -81,11 +84,11 @@ public final class Operations {
         return metrics;
     }
 
-    /** A compute route that reads its own body from the request (streamed, never held as a tree). */
+    /** A compute route that parses its own body from bytes (streamed into arrays, never held as a tree). */
     @FunctionalInterface
     public interface StreamedEndpoint {
-        /** The answer to the body of {@code ctx}, read under {@code ticket} (its memory reserved there). */
-        Object answer(Context ctx, ComputeGate.Ticket ticket);
+        /** The answer to a complete body (decoded, within the streamed-body limit). */
+        Object answer(InputStream body);
     }
 
     /**
@@ -97,7 +100,12 @@ public final class Operations {
         javalin.appData(COMPUTE_ROUTES, compute);
         // A blocking read of a request body that sees no byte for this long fails (408, see BodyReader);
         // the connector's own idle timeout still governs idle keep-alive connections.
-        javalin.jetty.modifyHttpConfiguration(http -> http.setIdleTimeout(ops.bodyTimeoutMillis()));
+        // RFC 9112 section 3.2.2: with an absolute-form target the Host header is ignored, not compared.
+        javalin.jetty.modifyHttpConfiguration(http -> {
+            http.setIdleTimeout(ops.bodyTimeoutMillis());
+            http.setHttpCompliance(HttpCompliance.RFC9110.with("RFC9112 absolute-form",
+                    HttpCompliance.Violation.MISMATCHED_AUTHORITY));
+        });
         javalin.events.handlerAdded(handler -> {
             if (!handler.getPath().contains("*") && !handler.getPath().contains("{")) {
                 routes.add(handler.getPath());
@@ -106,18 +114,22 @@ public final class Operations {
         AccessLog accessLog = new AccessLog(ops.accessLog());
         metrics.gauge("statesum.access.log.dropped", "access-log lines dropped because the writer was behind",
                 accessLog::dropped);
-        RequestObserver observer = new RequestObserver(metrics, routes, accessLog);
+        RequestObserver observer = new RequestObserver(metrics, routes);
+        javalin.jetty.modifyServer(server -> server.setRequestLog(new AccessLogLines(accessLog)));
         javalin.jetty.modifyServletContextHandler(context -> context.addFilter(new FilterHolder(observer), "/*",
                 EnumSet.of(DispatcherType.REQUEST)));
         javalin.routes.exception(OverloadedException.class, (e, ctx) -> {
             ctx.header("Retry-After", String.valueOf(e.retryAfterSeconds()));
             problems.write(ctx, e.problem());
         });
-        AccessControl access = new AccessControl(ops, metrics);
+        AccessControl access = new AccessControl(ops, metrics, problems);
         javalin.routes.before(access::before);
         compute.all().forEach((path, endpoint) -> javalin.routes.post(problems.allow("POST", path),
                 streamed.containsKey(path)
-                ? ctx -> direct(ctx, path, (c, ticket) -> () -> streamed.get(path).answer(c, ticket))
+                ? ctx -> direct(ctx, path, (c, ticket) -> {
+                    byte[] body = bodies.readStreamed(c, ticket);
+                    return () -> streamed.get(path).answer(new ByteArrayInputStream(body));
+                })
                 : ctx -> direct(ctx, path, (c, ticket) -> {
                     JsonNode body = bodies.read(c, ticket);
                     return () -> FiniteNumbers.answer(body, endpoint);
@@ -138,16 +150,18 @@ public final class Operations {
     }
 
     /**
-     * One compute request: admitted or 503, body read (at most running + queued bodies are in memory),
-     * a compute slot or 503, computed under the time limit and serialized (and gzipped, for a large
-     * answer to a client that accepts it) while the slot is held (a large answer is CPU work too), then
-     * written. A streamed endpoint reads as it computes, so its
-     * reading happens inside the slot.
+     * One compute request: its body read whole under the memory budget and the pace limits (429 when its
+     * client already sends too many bodies), then admitted or 503 at once, a compute slot or 503,
+     * computed under the time limit and serialized (and gzipped, for a large answer to a client that
+     * accepts it) while the slot is held (a large answer is CPU work too), then written. A slow body
+     * holds no admission and no slot.
      */
     private void direct(Context ctx, String path, BiFunction<Context, ComputeGate.Ticket, Supplier<Object>> prepare)
             throws IOException {
-        try (ComputeGate.Ticket ticket = gate.admit(); MemoryBudget.Share answerMemory = gate.memory()) {
+        try (ComputeGate.Ticket ticket = gate.open(ctx.req().getRemoteAddr());
+                MemoryBudget.Share answerMemory = gate.memory()) {
             Supplier<Object> work = prepare.apply(ctx, ticket);
+            ticket.admit();
             AnswerBuffer answer;
             boolean large;
             boolean gzip;

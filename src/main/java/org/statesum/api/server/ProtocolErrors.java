@@ -34,6 +34,12 @@ public final class ProtocolErrors extends ErrorHandler {
         this.mapper = mapper;
     }
 
+    /** Every method gets its problem document (Jetty's default skips all but GET, POST and HEAD). */
+    @Override
+    public boolean errorPageForMethod(String method) {
+        return true;
+    }
+
     @Override
     protected void generateResponse(Request request, Response response, int code, String message, Throwable cause,
             Callback callback) {

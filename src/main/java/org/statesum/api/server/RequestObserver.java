@@ -16,10 +16,15 @@ import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.regex.Pattern;
 
 /**
- * Wraps every request, whatever its route or outcome: gives it a request id (an incoming
- * {@code X-Request-Id} of 1 to 128 characters of {@code A-Za-z0-9._:-}, else 32 random hex digits),
- * echoes the id, sets the security headers, counts it in flight, and afterwards records its latency by
- * route, method and status and writes one access-log line ({@link AccessLog}).
+ * Wraps every request that reaches the application, whatever its route or outcome: gives it a request
+ * id (an incoming {@code X-Request-Id} of 1 to 128 characters of {@code A-Za-z0-9._:-}, else 32 random
+ * hex digits), echoes the id, sets the security headers, counts it in flight, and afterwards records its
+ * latency by route, method and status. The access-log line is written by {@link AccessLogLines} once
+ * the exchange is complete.
+ *
+ * <p>Method-override headers ({@code X-HTTP-Method-Override} and its kin, which the framework would
+ * honour) are hidden from everything behind this filter: the method a request runs is the method on
+ * its request line, the one proxies, allow-lists and the access log see.
  */
 public final class RequestObserver implements Filter {
 
@@ -35,22 +40,20 @@ public final class RequestObserver implements Filter {
 
     private final ServiceMetrics metrics;
     private final Set<String> routes;
-    private final AccessLog accessLog;
 
     /**
      * @param routes the registered paths (a live view): any other path is logged and measured as
      *        {@code unmatched}
      */
-    RequestObserver(ServiceMetrics metrics, Set<String> routes, AccessLog accessLog) {
+    RequestObserver(ServiceMetrics metrics, Set<String> routes) {
         this.metrics = metrics;
         this.routes = routes;
-        this.accessLog = accessLog;
     }
 
     @Override
     public void doFilter(ServletRequest request, ServletResponse response, FilterChain chain)
             throws IOException, ServletException {
-        HttpServletRequest req = (HttpServletRequest) request;
+        HttpServletRequest req = MethodOverride.hidden((HttpServletRequest) request);
         HttpServletResponse res = (HttpServletResponse) response;
         long start = System.nanoTime();
         String incoming = req.getHeader(REQUEST_ID);
@@ -59,48 +62,29 @@ public final class RequestObserver implements Filter {
         metrics.inFlight().incrementAndGet();
         boolean async = false;
         try {
-            chain.doFilter(request, response);
+            chain.doFilter(req, response);
             if (req.isAsyncStarted()) {
                 // Javalin may finish writing a large answer asynchronously: count the request until then
-                req.getAsyncContext().addListener(new Finish(() -> finish(req, res, id, start)));
+                req.getAsyncContext().addListener(new Finish(() -> finish(req, res, start)));
                 async = true;
             }
         } finally {
             if (!async) {
-                finish(req, res, id, start);
+                finish(req, res, start);
             }
         }
     }
 
-    private void finish(HttpServletRequest req, HttpServletResponse res, String id, long start) {
+    private void finish(HttpServletRequest req, HttpServletResponse res, long start) {
         metrics.inFlight().decrementAndGet();
-        long nanos = System.nanoTime() - start;
         String path = req.getRequestURI();
-        String route = routes.contains(path) ? path : "unmatched";
-        int status = res.getStatus();
-        String method = METHODS.contains(req.getMethod()) ? req.getMethod() : "other";
-        metrics.request(method, route, status, nanos);
-        if (accessLog.enabled()) {
-            accessLog.add(line(id, method, path, status, nanos, req.getContentLengthLong(), req.getRemoteAddr()));
-        }
+        metrics.request(method(req.getMethod()), routes.contains(path) ? path : "unmatched", res.getStatus(),
+                System.nanoTime() - start);
     }
 
-    /**
-     * One access-log line: {@code id=... method=... path=... status=... ms=... bytesIn=... client=...},
-     * the path cut at 200 characters, the time in milliseconds with three decimals (integer arithmetic:
-     * a double's decimal formatting cost more than the rest of the line).
-     */
-    static String line(String id, String method, String path, int status, long nanos, long bytesIn, String client) {
-        long micros = Math.max(0, nanos) / 1_000;
-        int fraction = (int) (micros % 1_000);
-        StringBuilder line = new StringBuilder(160).append("id=").append(id).append(" method=").append(method)
-                .append(" path=").append(path.length() > 200 ? path.substring(0, 200) + "..." : path)
-                .append(" status=").append(status).append(" ms=").append(micros / 1_000).append('.');
-        if (fraction < 100) {
-            line.append(fraction < 10 ? "00" : "0");
-        }
-        return line.append(fraction).append(" bytesIn=").append(Math.max(0, bytesIn)).append(" client=").append(client)
-                .toString();
+    /** The method as measured and logged: one of {@link #METHODS}, else {@code other}. */
+    static String method(String method) {
+        return METHODS.contains(method) ? method : "other";
     }
 
     /** Runs once when an asynchronous answer completes, fails or times out. */

@@ -163,7 +163,7 @@ public final class QuasiHarmonicRequestReader {
         double[] pa = values.get().clone();
         boolean good = true;
         for (int i = 0; i < pa.length; i++) {
-            pa[i] *= unit.get().pascalsPerUnit();
+            pa[i] = pa[i] * unit.get().pascalsPerUnit() + 0.0; // + 0.0: -0.0 is the pressure 0
             if (!(Math.abs(pa[i]) <= MAX_PRESSURE_PASCAL)) {
                 fields.add(at + "/values/" + i, "|P| must be at most " + MAX_PRESSURE_PASCAL + " Pa");
                 good = false;

@@ -59,6 +59,27 @@ class ServiceConfigTest {
     }
 
     @Test
+    void theListeningAddressAndThePerClientBodyCapAreRead() {
+        assertEquals("", OperationsConfig.defaults().host(), "every interface by default");
+        assertEquals(8, OperationsConfig.defaults().maxBodiesPerClient());
+        OperationsConfig ops = ServiceConfig.fromEnvironment(Map.of("STATESUM_HOST", " 127.0.0.1 ",
+                "STATESUM_MAX_BODIES_PER_CLIENT", "0")).operations();
+        assertEquals("127.0.0.1", ops.host());
+        assertEquals(0, ops.maxBodiesPerClient());
+        assertEquals("::1", ServiceConfig.fromEnvironment(Map.of("STATESUM_HOST", "::1")).operations().host());
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> ServiceConfig.fromEnvironment(
+                Map.of("STATESUM_HOST", "http://0.0.0.0:80/", "STATESUM_MAX_BODIES_PER_CLIENT", "-1")));
+        assertTrue(e.getMessage().contains("STATESUM_HOST must be an IP address or a host name"), e.getMessage());
+        assertTrue(e.getMessage().contains("STATESUM_MAX_BODIES_PER_CLIENT"), e.getMessage());
+    }
+
+    @Test
+    void theShutdownGraceOutlastsTheTimeLimit() {
+        // a direct job admitted just before SIGTERM can still finish inside the grace
+        assertTrue(OperationsConfig.defaults().shutdownGraceMillis() > OperationsConfig.defaults().timeLimitMillis());
+    }
+
+    @Test
     void badValuesAreRejectedNamingEveryBadVariable() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () ->
                 ServiceConfig.fromEnvironment(Map.of(

@@ -72,12 +72,12 @@ class AccessLogTest {
 
     @Test
     void aLineNamesTheRequestWithMillisecondsToThreeDecimals() {
-        assertEquals("id=abc method=POST path=/v1/spectrum status=200 ms=0.087 bytesIn=88 client=127.0.0.1",
-                RequestObserver.line("abc", "POST", "/v1/spectrum", 200, 87_654, 88, "127.0.0.1"));
-        assertEquals("id=abc method=GET path=/x status=404 ms=1234.005 bytesIn=0 client=::1",
-                RequestObserver.line("abc", "GET", "/x", 404, 1_234_005_999L, -1, "::1"));
+        assertEquals("id=abc method=POST path=/v1/spectrum status=200 ms=0.087 bytesIn=88 bytesOut=1200 client=127.0.0.1",
+                AccessLogLines.line("abc", "POST", "/v1/spectrum", 200, 87_654, 88, 1200, "127.0.0.1"));
+        assertEquals("id=abc method=GET path=/x status=404 ms=1234.005 bytesIn=0 bytesOut=0 client=::1",
+                AccessLogLines.line("abc", "GET", "/x", 404, 1_234_005_999L, -1, -1, "::1"));
         String longPath = "/" + "a".repeat(300);
-        assertTrue(RequestObserver.line("abc", "GET", longPath, 404, 0, 0, "h")
+        assertTrue(AccessLogLines.line("abc", "GET", longPath, 404, 0, 0, 0, "h")
                 .contains(" path=/" + "a".repeat(199) + "... status=404 ms=0.000 "));
     }
 }

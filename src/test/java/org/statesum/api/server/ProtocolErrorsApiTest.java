@@ -6,14 +6,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.ByteArrayOutputStream;
 import java.io.IOException;
-import java.io.InputStream;
-import java.net.Socket;
-import java.net.SocketTimeoutException;
-import java.nio.charset.StandardCharsets;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
+import org.statesum.testing.OpsFixtures;
 import org.statesum.testing.TestServer;
 
 /**
@@ -24,24 +20,8 @@ class ProtocolErrorsApiTest {
 
     private static final ObjectMapper JSON = new ObjectMapper();
 
-    /** Sends {@code request} as it is and returns the whole answer (until the server closes or 2 s of quiet). */
     private static String send(String request) throws IOException {
-        try (Socket socket = new Socket("localhost", TestServer.shared().port())) {
-            socket.setSoTimeout(2_000);
-            socket.getOutputStream().write(request.getBytes(StandardCharsets.ISO_8859_1));
-            socket.getOutputStream().flush();
-            InputStream in = socket.getInputStream();
-            ByteArrayOutputStream answer = new ByteArrayOutputStream();
-            byte[] buffer = new byte[8192];
-            try {
-                for (int n; (n = in.read(buffer)) > 0; ) {
-                    answer.write(buffer, 0, n);
-                }
-            } catch (SocketTimeoutException e) {
-                // a kept-alive connection: what arrived is the answer
-            }
-            return answer.toString(StandardCharsets.ISO_8859_1);
-        }
+        return OpsFixtures.raw(TestServer.shared().port(), request);
     }
 
     /** Each request written with ~ for CR LF. */
