@@ -74,14 +74,19 @@ public final class CrystalModel {
             }
             p.put("debyeFunctionErrorBound", worst);
             p.put("debyeFunctionTermsMax", terms);
+        } else if (crystal.vibrations() instanceof Vibrations.Density) {
+            p.put("summation", "compensated (Neumaier) sum over the density's segments");
+            p.put("segmentsSummed", crystal.vibrations().modeCount());
         } else {
             p.put("summation", "compensated (Neumaier) sums over modes; ln(1 - e^-x) by log1p or expm1");
             p.put("modesSummed", crystal.vibrations().modeCount());
         }
         p.put("errorAnalysis", "first-order running error bound with the frequency conversion error, doubled");
         if (crystal.normalisation() != null) {
-            p.put("quadrature", "trapezoidal rule on the grid refined by its midpoints (density read as piecewise "
-                    + "linear); Richardson estimate |fine - coarse| / 3, doubled, added to every bound");
+            p.put("quadrature", "none: the density, read as linear between its nodes, is integrated exactly on each "
+                    + "segment (closed forms in the polylogarithms Li_1, Li_2, Li_3 of e^-x, by their series about "
+                    + "x = 0 below x = 1.5 and in e^-x above; each with a proven truncation bound and a running "
+                    + "rounding bound)");
         }
         return p;
     }

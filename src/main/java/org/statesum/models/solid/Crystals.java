@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.statesum.engine.DomainException;
 import org.statesum.engine.HarmonicModes;
+import org.statesum.engine.LinearDensityOfStates;
 import org.statesum.units.FrequencyUnit;
 
 /**
@@ -33,7 +34,7 @@ public final class Crystals {
     /** Einstein crystal: 3 x atoms modes at theta_E (K). */
     public static Crystal einstein(double thetaKelvin, double thetaRelativeError, int atoms) {
         return new Crystal("einstein", new Vibrations.Modes(HarmonicModes.of(new double[] {thetaKelvin},
-                new double[] {3.0 * atoms}, thetaRelativeError), null), atoms, ModeScreen.none(), null);
+                new double[] {3.0 * atoms}, thetaRelativeError)), atoms, ModeScreen.none(), null);
     }
 
     /** Einstein crystal from its frequency. */
@@ -74,14 +75,15 @@ public final class Crystals {
                 }
             }
         }
-        return new Crystal("phonons", new Vibrations.Modes(modes(kept), null), atoms,
+        return new Crystal("phonons", new Vibrations.Modes(modes(kept)), atoms,
                 new ModeScreen(nearZero, imaginary, unit.toKelvin(tolerance)), null);
     }
 
     /**
-     * A density of states g(nu) on an increasing grid, read as piecewise linear. The quadrature is the
-     * trapezoidal rule on the grid refined by its midpoints, with the unrefined rule kept for the
-     * Richardson error estimate (see {@link Vibrations.Modes}).
+     * A density of states g(nu) on an increasing grid, read as piecewise linear and integrated exactly on
+     * each segment ({@link LinearDensityOfStates}). Density at imaginary frequencies (given as negative
+     * ones) is left out when it lies within the tolerance of 0, and makes the crystal dynamically
+     * unstable beyond it; a segment that crosses 0 is split there.
      *
      * @param normalise rescale g so that int g = 3 x atoms; otherwise check it within
      *        {@link #NORMALISATION_TOLERANCE}
@@ -104,40 +106,43 @@ public final class Crystals {
             throw new DomainException("density-not-normalised", "/density", "the density integrates to 0");
         }
         double factor = normalise ? expected / integral : 1.0;
-        List<double[]> fine = new ArrayList<>();
-        List<double[]> coarse = new ArrayList<>();
-        double[] left = new double[3];
+        double kelvinPerUnit = unit.toKelvin(1.0);
+        List<double[]> nodes = new ArrayList<>(); // (theta K, g per K) at nu >= 0
+        double imaginary = 0;
         for (int i = 0; i < n; i++) {
-            double hl = i > 0 ? grid[i] - grid[i - 1] : 0;
-            double hr = i + 1 < n ? grid[i + 1] - grid[i] : 0;
+            double nu = grid[i];
             double g = density[i] * factor;
-            add(grid[i], g * (hl + hr) / 4, unit, tolerance, fine, left);
-            add(grid[i], g * (hl + hr) / 2, unit, tolerance, coarse, new double[3]);
-            if (i + 1 < n) {
-                add(0.5 * (grid[i] + grid[i + 1]), 0.5 * hr * 0.5 * (density[i] + density[i + 1]) * factor, unit,
-                        tolerance, fine, left);
+            if (nu < -tolerance && g > 0 || i + 1 < n && nu < -tolerance && grid[i + 1] > -tolerance
+                    && density[i + 1] > 0) {
+                throw new DomainException("dynamically-unstable", "/frequencies",
+                        "the density has weight at imaginary frequencies beyond the tolerance: dynamically unstable");
+            }
+            if (nu >= 0) {
+                if (nodes.isEmpty() && i > 0 && nu > 0) {
+                    // the segment from grid[i - 1] < 0 crosses 0: split it there
+                    double g0 = density[i - 1] * factor + (g - density[i - 1] * factor) * (-grid[i - 1]) / (nu - grid[i - 1]);
+                    imaginary += 0.5 * (-grid[i - 1]) * (density[i - 1] * factor + g0);
+                    nodes.add(new double[] {0, g0 / kelvinPerUnit});
+                }
+                nodes.add(new double[] {unit.toKelvin(nu), g / kelvinPerUnit});
+            } else if (i + 1 < n && grid[i + 1] <= 0) {
+                imaginary += 0.5 * (grid[i + 1] - nu) * (g + density[i + 1] * factor);
             }
         }
-        if (left[2] > 0) {
+        if (nodes.size() < 2) {
             throw new DomainException("dynamically-unstable", "/frequencies",
-                    "the density has weight at imaginary frequencies beyond the tolerance: dynamically unstable");
+                    "the density has no weight at real frequencies");
         }
-        return new Crystal("density-of-states", new Vibrations.Modes(modes(fine), modes(coarse)), atoms,
-                new ModeScreen(left[0], left[1], unit.toKelvin(tolerance)),
+        double[] theta = new double[nodes.size()];
+        double[] perKelvin = new double[nodes.size()];
+        for (int i = 0; i < theta.length; i++) {
+            theta[i] = nodes.get(i)[0];
+            perKelvin[i] = nodes.get(i)[1];
+        }
+        return new Crystal("density-of-states",
+                new Vibrations.Density(LinearDensityOfStates.of(theta, perKelvin, CONVERSION_ERROR)), atoms,
+                new ModeScreen(0, imaginary, unit.toKelvin(tolerance)),
                 new Crystal.Normalisation(integral, expected, factor, normalise));
-    }
-
-    private static void add(double nu, double weight, FrequencyUnit unit, double tolerance, List<double[]> into,
-            double[] leftOut) {
-        if (weight == 0) {
-            return;
-        }
-        switch (kind(nu, tolerance, unit)) {
-            case KEPT -> into.add(new double[] {unit.toKelvin(nu), weight});
-            case NEAR_ZERO -> leftOut[0] += weight;
-            case SMALL_IMAGINARY -> leftOut[1] += weight;
-            default -> leftOut[2] += weight;
-        }
     }
 
     private static ModeKind kind(double nu, double tolerance, FrequencyUnit unit) {

@@ -2,14 +2,15 @@ package org.statesum.models.solid;
 
 import org.statesum.engine.DebyeSolid;
 import org.statesum.engine.HarmonicModes;
+import org.statesum.engine.LinearDensityOfStates;
 import org.statesum.engine.VibrationalTable;
 
 /**
  * The harmonic vibrations of one formula unit, in reduced units (theta = h nu / k_B in K): either a
- * Debye solid (one Debye temperature for every atom) or a set of weighted modes (Einstein, a q-point
- * mesh, or quadrature nodes over a density of states). Immutable.
+ * Debye solid (one Debye temperature for every atom), a set of weighted modes (Einstein, a q-point
+ * mesh) or a piecewise-linear density of states integrated exactly. Immutable.
  */
-public sealed interface Vibrations permits Vibrations.Debye, Vibrations.Modes {
+public sealed interface Vibrations permits Vibrations.Debye, Vibrations.Modes, Vibrations.Density {
 
     /** Thermodynamics of one formula unit on a grid (K): energies / k_B in K, entropies in k_B. */
     VibrationalTable evaluate(double[] temperaturesKelvin);
@@ -58,55 +59,51 @@ public sealed interface Vibrations permits Vibrations.Debye, Vibrations.Modes {
         }
     }
 
-    /**
-     * Weighted modes. With {@code coarse} non-null (a density of states), the answer is the quadrature on
-     * the refined nodes and the difference from the coarse nodes, as a Richardson estimate
-     * |fine - coarse| / 3 doubled, is added to every bound.
-     */
-    record Modes(HarmonicModes fine, HarmonicModes coarse) implements Vibrations {
+    /** Weighted modes (Einstein oscillators, phonon branches on a q-point mesh). */
+    record Modes(HarmonicModes modes) implements Vibrations {
 
         @Override
         public VibrationalTable evaluate(double[] temperaturesKelvin) {
-            if (coarse == null) {
-                return fine.evaluate(temperaturesKelvin);
-            }
-            int n = temperaturesKelvin.length;
-            double[][] cols = new double[8][n];
-            double[] out = new double[8];
-            for (int j = 0; j < n; j++) {
-                evaluateAt(temperaturesKelvin[j], out);
-                for (int q = 0; q < 8; q++) {
-                    cols[q][j] = out[q];
-                }
-            }
-            double zpDiff = Math.abs(fine.zeroPointEnergyKelvin() - coarse.zeroPointEnergyKelvin());
-            VibrationalTable f = fine.evaluate(new double[0]);
-            return new VibrationalTable(temperaturesKelvin.clone(),
-                    new org.statesum.engine.Series(cols[0], cols[4]), new org.statesum.engine.Series(cols[1], cols[5]),
-                    new org.statesum.engine.Series(cols[2], cols[6]), new org.statesum.engine.Series(cols[3], cols[7]),
-                    f.zeroPointEnergyKelvin(), f.zeroPointEnergyBound() + 2 * zpDiff / 3);
+            return modes.evaluate(temperaturesKelvin);
         }
 
         @Override
         public void evaluateAt(double temperatureKelvin, double[] out) {
-            fine.evaluateAt(temperatureKelvin, out);
-            if (coarse != null) {
-                double[] c = new double[8];
-                coarse.evaluateAt(temperatureKelvin, c);
-                for (int q = 0; q < 4; q++) {
-                    out[q + 4] += 2 * Math.abs(out[q] - c[q]) / 3;
-                }
-            }
+            modes.evaluateAt(temperatureKelvin, out);
         }
 
         @Override
         public Vibrations scaled(double factor) {
-            return new Modes(fine.scaled(factor), coarse == null ? null : coarse.scaled(factor));
+            return new Modes(modes.scaled(factor));
         }
 
         @Override
         public int modeCount() {
-            return fine.size() + (coarse == null ? 0 : coarse.size());
+            return modes.size();
+        }
+    }
+
+    /** A density of states, linear between its nodes, integrated segment by segment in closed form. */
+    record Density(LinearDensityOfStates density) implements Vibrations {
+
+        @Override
+        public VibrationalTable evaluate(double[] temperaturesKelvin) {
+            return density.evaluate(temperaturesKelvin);
+        }
+
+        @Override
+        public void evaluateAt(double temperatureKelvin, double[] out) {
+            density.evaluateAt(temperatureKelvin, out);
+        }
+
+        @Override
+        public Vibrations scaled(double factor) {
+            return new Density(density.scaled(factor));
+        }
+
+        @Override
+        public int modeCount() {
+            return density.size();
         }
     }
 }

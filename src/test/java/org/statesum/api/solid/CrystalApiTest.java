@@ -104,4 +104,42 @@ class CrystalApiTest {
                 .body("system.normalisation.factor", closeTo(0.6, 1e-15))
                 .body("warnings.code", contains("DENSITY_RESCALED"));
     }
+
+    /**
+     * The audit's case: a nu^2 density on 49 nodes from 0 to 12 THz. Far below the first node the answer is
+     * the first segment's own power law, g = g_1 theta / theta_1 giving S = 3 zeta(3) (g_1 / theta_1) k_B T^2
+     * (int x phi_S dx = int x^2 n dx - int x ln(1 - e^{-x}) dx = 2 zeta(3) + zeta(3), over x &gt; 0; common
+     * practice), where a sum over nodes would fall off as e^{-theta_1 / T}.
+     */
+    @Test
+    void aDensityOfStatesFollowsItsFirstSegmentFarBelowItsFirstNode() throws Exception {
+        StringBuilder nu = new StringBuilder();
+        StringBuilder g = new StringBuilder();
+        for (int i = 0; i < 49; i++) {
+            double f = 12.0 * i / 48;
+            nu.append(i == 0 ? "" : ",").append(f);
+            g.append(i == 0 ? "" : ",").append(9 * f * f / (12.0 * 12 * 12)); // 3 modes per THz^3 / 3
+        }
+        String body = "{\"atomsPerFormulaUnit\": 1, \"vibrations\": {\"model\": \"density-of-states\","
+                + " \"frequencyUnit\": \"THz\", \"frequencies\": [" + nu + "], \"density\": [" + g + "], \"normalisation\": \"check\"},"
+                + " \"temperatures\": {\"values\": [0.001, 0.1]}, \"outputUnit\": \"kJ/mol\"}";
+        com.fasterxml.jackson.databind.JsonNode answer = new com.fasterxml.jackson.databind.ObjectMapper().readTree(
+                server.request().contentType("application/json").body(body).post("/v1/crystal")
+                        .then().statusCode(200).extract().asString());
+        double kelvinPerThz = org.statesum.units.FrequencyUnit.bySymbol("THz").orElseThrow().toKelvin(1.0);
+        double theta1 = 0.25 * kelvinPerThz;
+        double g1PerKelvin = 9 * 0.25 * 0.25 / (12.0 * 12 * 12) / kelvinPerThz;
+        double zeta3 = 1.2020569031595942; // Apery's constant (OEIS A002117)
+        double r = org.statesum.units.PhysicalConstants.GAS_CONSTANT_J_PER_MOL_K;
+        double[] temperatures = {0.001, 0.1};
+        for (int j = 0; j < 2; j++) {
+            double t = temperatures[j];
+            double expected = 3 * zeta3 * g1PerKelvin / theta1 * t * t * r; // J/(mol K)
+            double s = answer.at("/entropy/values/" + j).asDouble();
+            double bound = answer.at("/entropy/errorBounds/" + j).asDouble();
+            // the next correction is of order e^{-theta_1 / T} (theta_1 = 12 K): e^-120 at 0.1 K
+            org.junit.jupiter.api.Assertions.assertEquals(expected, s, 1e-9 * expected, "S at " + t + " K");
+            org.junit.jupiter.api.Assertions.assertTrue(bound < 1e-9 * s, "the bound is useful at " + t + " K: " + bound);
+        }
+    }
 }
