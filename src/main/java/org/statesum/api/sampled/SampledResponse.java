@@ -12,7 +12,8 @@ import org.statesum.units.PhysicalConstants;
  * Maps a {@link FreeEnergyEstimate} to the {@code POST /v1/sampled} answer: the dimensionless free
  * energies f_k - f_0 and the matrix of differences f_j - f_i, each with {@code uncertainties} (one
  * statistical standard deviation) beside {@code errorBounds} (numerical error only); the same in
- * the output energy unit, F = f k_B T, when a temperature was given; MBAR's overlap diagnostics;
+ * the output energy unit, F = f k_B T, when a temperature was given; MBAR's overlap diagnostics, or
+ * the pairwise estimators' (effective sample sizes for EXP, two-state overlaps for BAR);
  * then {@code precision}, {@code warnings} and {@code provenance}.
  */
 public final class SampledResponse {
@@ -55,6 +56,20 @@ public final class SampledResponse {
             overlap.put("secondLargestEigenvalue", estimate.overlap().secondLargestEigenvalue());
             overlap.put("effectiveSampleSizes", estimate.overlap().effectiveSampleSizes());
             body.put("overlap", overlap);
+        }
+        if (!estimate.pairs().isEmpty()) {
+            body.put("pairs", estimate.pairs().stream().map(pair -> {
+                Map<String, Object> m = new LinkedHashMap<>();
+                m.put("states", new int[] {pair.lower(), pair.lower() + 1});
+                m.put("samples", pair.samples());
+                if (!Double.isNaN(pair.effectiveSampleSize())) {
+                    m.put("effectiveSampleSize", pair.effectiveSampleSize());
+                }
+                if (!Double.isNaN(pair.overlap())) {
+                    m.put("overlap", pair.overlap());
+                }
+                return m;
+            }).toList());
         }
         body.put("precision", estimate.precision());
         body.put("warnings", estimate.warnings().stream().map(w -> {

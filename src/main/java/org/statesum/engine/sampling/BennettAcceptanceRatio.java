@@ -1,5 +1,6 @@
 package org.statesum.engine.sampling;
 
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -20,6 +21,13 @@ import org.statesum.engine.DomainException;
  * <p>Variance (Shirts, Bair, Hooker and Pande 2003, eq. 10, with N = n_A + n_B):
  * var(df) = (1/N) [ &lt;1 / (2 + 2 cosh(M + w - df))&gt;^-1 - (N/n_A + N/n_B) ], the average running over
  * all N samples with w = u_B - u_A. It equals the two-state MBAR asymptotic variance.
+ *
+ * <p>Overlap: the pair's two-state overlap matrix (as MBAR's), O_AB = (1 / n_A) sum_n 1 / (2 + 2 cosh(M
+ * + w_n - df)) over the samples of both states and O_BA = O_AB n_A / n_B; the smaller is reported, and
+ * below {@link Mbar#POOR_OVERLAP} the pair is named in a {@code STATES_DO_NOT_OVERLAP} warning. When the
+ * sum underflows to 0 (the states share no samples at all) the variance and the slope of Bennett's
+ * equation are not finite: {@code SAMPLES_DO_NOT_OVERLAP}, a 422 naming the reduced potentials, rather
+ * than an answer without an uncertainty.
  *
  * <p>Accuracy: the error bound is the root tolerance plus the first-order rounding error of phi
  * divided by its slope at the root, doubled.
@@ -53,13 +61,27 @@ public final class BennettAcceptanceRatio {
         double[] variances = new double[k - 1];
         double[] bounds = new double[k - 1];
         int evaluations = 0;
+        List<FreeEnergyEstimate.PairOverlap> pairs = new ArrayList<>();
+        List<FreeEnergyEstimate.SampleWarning> warnings = new ArrayList<>();
         for (int s = 0; s < k - 1; s++) {
             Pair pair = Pair.of(data, s, s + 1);
             double[] one = pair.solve();
+            if (!(Double.isFinite(one[1]) && Double.isFinite(one[2]) && one[4] > 0)) {
+                throw new DomainException("SAMPLES_DO_NOT_OVERLAP", "/reducedPotentials", "the samples of states " + s
+                        + " and " + (s + 1) + " do not overlap at all (their overlap underflows to 0), so Bennett's "
+                        + "equation fixes no finite estimate or uncertainty; add intermediate states");
+            }
             steps[s] = one[0];
             variances[s] = one[1];
             bounds[s] = one[2];
             evaluations += (int) one[3];
+            pairs.add(new FreeEnergyEstimate.PairOverlap(s, data.counts()[s] + data.counts()[s + 1], Double.NaN, one[4]));
+            if (!(one[4] >= Mbar.POOR_OVERLAP)) {
+                warnings.add(new FreeEnergyEstimate.SampleWarning("STATES_DO_NOT_OVERLAP", "states " + s + " and "
+                        + (s + 1) + " overlap " + String.format("%.3g", one[4]) + ", less than " + Mbar.POOR_OVERLAP
+                        + ": the estimate and its uncertainty are unreliable; add intermediate states or samples",
+                        new int[] {s, s + 1}));
+            }
         }
         Map<String, Object> precision = new LinkedHashMap<>();
         precision.put("arithmetic", "IEEE 754 binary64");
@@ -71,7 +93,7 @@ public final class BennettAcceptanceRatio {
                 "root tolerance plus first-order rounding of the equation over its slope, doubled");
         precision.put("uncertainty", "asymptotic (Shirts et al. 2003), one standard deviation");
         return new FreeEnergyEstimate("bar", PairChain.values(steps), PairChain.uncertainties(variances),
-                PairChain.errorBounds(steps, bounds), null, precision, List.of());
+                PairChain.errorBounds(steps, bounds), null, pairs, precision, warnings);
     }
 
     /** The work values of one pair. */
@@ -106,7 +128,7 @@ public final class BennettAcceptanceRatio {
             return LogSpace.logSumExp(x) - LogSpace.logSumExp(y);
         }
 
-        /** {df, variance, error bound, evaluations}. */
+        /** {df, variance, error bound, evaluations, overlap}. */
         double[] solve() {
             double guess = 0.5 * (mean(forward) - mean(reverse));
             double lo = guess - 1;
@@ -124,7 +146,7 @@ public final class BennettAcceptanceRatio {
             BrentSolver brent = new BrentSolver(ROOT_RELATIVE_ACCURACY, ROOT_ABSOLUTE_ACCURACY);
             double df = brent.solve(MAX_EVALUATIONS, this::phi, lo, hi, guess);
             int evaluations = brent.getEvaluations();
-            return new double[] {df, variance(df), bound(df), evaluations};
+            return new double[] {df, variance(df), bound(df), evaluations, overlap(df)};
         }
 
         private double variance(double df) {
@@ -139,6 +161,18 @@ public final class BennettAcceptanceRatio {
             double mean = sum / total;
             double v = (1 / mean - (total / forward.length + total / reverse.length)) / total;
             return Math.max(0, v);
+        }
+
+        /** min(O_AB, O_BA) of the two-state overlap matrix at the root. */
+        private double overlap(double df) {
+            double sum = 0;
+            for (double w : forward) {
+                sum += LogSpace.logisticDensity(logRatio + w - df);
+            }
+            for (double w : reverse) {
+                sum += LogSpace.logisticDensity(logRatio - w - df);
+            }
+            return sum / Math.max(forward.length, reverse.length);
         }
 
         private double bound(double df) {

@@ -1,5 +1,6 @@
 package org.statesum.engine.sampling;
 
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -15,11 +16,24 @@ import java.util.Map;
  * overflows. The estimator is biased and its variance estimate unreliable when the two states
  * overlap poorly; prefer BAR or MBAR.
  *
+ * <p>Overlap: the Kish effective sample size of the weights e^{-w}, (sum e^{-w})^2 / sum e^{-2w} =
+ * exp(2 lse(-w) - lse(-2w)), says how many samples carry the average; below
+ * {@link #FEW_EFFECTIVE_SAMPLES} the pair is named in a {@code STATES_DO_NOT_OVERLAP} warning (the
+ * estimate and its uncertainty then rest on a handful of samples and are typically biased). A pair
+ * whose variance is not a finite double (the samples' weights span more than the double range) has no
+ * usable estimate: {@code SAMPLES_DO_NOT_OVERLAP}, a 422 naming the reduced potentials.
+ *
  * <p>Accuracy: the numerical error bound is a first-order running bound on the log-sum-exp
  * (rounding of each work value, each shifted exponent, the n - 1 additions and the final logarithm),
  * doubled.
  */
 public final class ExponentialAveraging {
+
+    /**
+     * Effective samples below which a pair is reported as not overlapping: an average carried by fewer
+     * than ten samples (common practice; the Kish effective size, L. Kish, Survey Sampling, 1965).
+     */
+    public static final double FEW_EFFECTIVE_SAMPLES = 10;
 
     private ExponentialAveraging() {
     }
@@ -38,6 +52,8 @@ public final class ExponentialAveraging {
         double[] steps = new double[k - 1];
         double[] variances = new double[k - 1];
         double[] bounds = new double[k - 1];
+        List<FreeEnergyEstimate.PairOverlap> pairs = new ArrayList<>();
+        List<FreeEnergyEstimate.SampleWarning> warnings = new ArrayList<>();
         for (int s = 0; s < k - 1; s++) {
             int from = forward ? s : s + 1;
             int to = forward ? s + 1 : s;
@@ -46,9 +62,23 @@ public final class ExponentialAveraging {
                         "exponential averaging needs at least 2 samples from state " + from);
             }
             double[] one = step(data, from, to);
+            if (!(Double.isFinite(one[1]) && Double.isFinite(one[2]))) {
+                throw new org.statesum.engine.DomainException("SAMPLES_DO_NOT_OVERLAP", "/reducedPotentials",
+                        "the samples of state " + from + " carry no usable weight for state " + to + ": the "
+                                + "exponential weights span beyond the range of a double, so the estimate has no "
+                                + "finite uncertainty; add intermediate states");
+            }
             steps[s] = forward ? one[0] : -one[0];
             variances[s] = one[1];
             bounds[s] = one[2];
+            pairs.add(new FreeEnergyEstimate.PairOverlap(s, data.counts()[from], one[3], Double.NaN));
+            if (!(one[3] >= FEW_EFFECTIVE_SAMPLES)) {
+                warnings.add(new FreeEnergyEstimate.SampleWarning("STATES_DO_NOT_OVERLAP", "states " + s + " and "
+                        + (s + 1) + ": the average over state " + from + " rests on " + String.format("%.3g", one[3])
+                        + " effective samples of " + data.counts()[from] + " (fewer than " + (int) FEW_EFFECTIVE_SAMPLES
+                        + "): the estimate is likely biased and its uncertainty too small; use BAR or MBAR, or add "
+                        + "intermediate states", new int[] {s, s + 1}));
+            }
         }
         Map<String, Object> precision = new LinkedHashMap<>();
         precision.put("arithmetic", "IEEE 754 binary64");
@@ -57,10 +87,14 @@ public final class ExponentialAveraging {
         precision.put("uncertainty", "asymptotic (delta method), one standard deviation");
         precision.put("direction", forward ? "forward" : "reverse");
         return new FreeEnergyEstimate("exponential-averaging", PairChain.values(steps),
-                PairChain.uncertainties(variances), PairChain.errorBounds(steps, bounds), null, precision, List.of());
+                PairChain.uncertainties(variances), PairChain.errorBounds(steps, bounds), null, pairs, precision,
+                warnings);
     }
 
-    /** {f_to - f_from, its variance, its numerical error bound} from the samples of state {@code from}. */
+    /**
+     * {f_to - f_from, its variance, its numerical error bound, the effective sample size} from the
+     * samples of state {@code from}.
+     */
     static double[] step(ReducedPotentials data, int from, int to) {
         int n = data.counts()[from];
         int offset = data.offset(from);
@@ -76,7 +110,9 @@ public final class ExponentialAveraging {
         double lse = LogSpace.logSumExp(minusW);
         double logN = Math.log(n);
         double delta = logN - lse;
-        double ratio = Math.exp(LogSpace.logSumExp(minusTwoW) - 2 * lse + logN);
+        double lse2 = LogSpace.logSumExp(minusTwoW);
+        double ratio = Math.exp(lse2 - 2 * lse + logN);
+        double effective = Math.exp(2 * lse - lse2);
         double variance = Math.max(0, ratio - 1) / (n - 1);
         double largest = Double.NEGATIVE_INFINITY;
         for (double x : minusW) {
@@ -91,6 +127,6 @@ public final class ExponentialAveraging {
         double u = LogSpace.UNIT_ROUNDOFF;
         double bound = 2 * u * (worstArgument + spread + 2 + (n - 1) + Math.abs(lse - largest)
                 + Math.abs(largest) + Math.abs(lse) + logN + Math.abs(delta));
-        return new double[] {delta, variance, bound};
+        return new double[] {delta, variance, bound, effective};
     }
 }

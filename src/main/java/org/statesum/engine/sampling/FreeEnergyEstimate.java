@@ -14,6 +14,7 @@ import java.util.Map;
  * @param differenceUncertainties [i][j]: standard deviation of f_j - f_i (symmetric, zero diagonal)
  * @param errorBounds bound on the numerical error of values[k]; 0 for state 0
  * @param overlap MBAR diagnostics, or null for the pairwise estimators
+ * @param pairs the pairwise estimators' diagnostics, one a neighbouring pair; empty for MBAR
  * @param precision how the numbers were computed (solver, iterations, residual)
  * @param warnings conditions the caller should know about, naming states
  */
@@ -23,6 +24,7 @@ public record FreeEnergyEstimate(
         double[][] differenceUncertainties,
         double[] errorBounds,
         Overlap overlap,
+        List<PairOverlap> pairs,
         Map<String, Object> precision,
         List<SampleWarning> warnings) {
 
@@ -36,6 +38,22 @@ public record FreeEnergyEstimate(
      * @param effectiveSampleSizes Kish's effective number of samples for each state, 1 / sum_n W_kn^2
      */
     public record Overlap(double[][] matrix, double secondLargestEigenvalue, double[] effectiveSampleSizes) {
+    }
+
+    /**
+     * How well one pair of neighbouring states overlaps, as the pairwise estimators see it.
+     *
+     * @param lower the pair's first state
+     * @param samples the samples the estimate averaged over (EXP: those of the state averaged over;
+     *        BAR: both states')
+     * @param effectiveSampleSize EXP: Kish's effective number of the exponential weights e^{-w},
+     *        (sum e^{-w})^2 / sum e^{-2w}, between 1 (one sample carries the average) and the sample
+     *        count; NaN for BAR
+     * @param overlap BAR: the smaller off-diagonal element of the pair's two-state overlap matrix,
+     *        O_AB = (1 / n_A) sum_n 1 / (2 + 2 cosh(M + w_n - df)) over both states' samples (the same
+     *        matrix MBAR reports); NaN for EXP
+     */
+    public record PairOverlap(int lower, int samples, double effectiveSampleSize, double overlap) {
     }
 
     /** A warning about particular states (indices from 0). */

@@ -86,7 +86,7 @@ public final class Mbar {
                     + " passes; see precision.relativeGradient", new int[0]));
         }
         return new FreeEnergyEstimate("mbar", values, MbarCovariance.differenceUncertainties(m, counts), bounds,
-                new FreeEnergyEstimate.Overlap(overlap, second, ess), solution.precision(), warnings);
+                new FreeEnergyEstimate.Overlap(overlap, second, ess), List.of(), solution.precision(), warnings);
     }
 
     private static java.util.Optional<FreeEnergyEstimate.SampleWarning> poorOverlap(double[][] o) {
