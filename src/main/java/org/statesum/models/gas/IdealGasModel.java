@@ -117,9 +117,12 @@ public final class IdealGasModel {
         if (hits.length == 0) {
             return Optional.empty();
         }
+        String advice = rotation instanceof LinearRotor
+                ? "prefer \"treatment\": \"level-sum\", which sums the rotor's levels exactly"
+                : "no level sum is offered for nonlinear rotors, so treat the rotational part as approximate "
+                        + "(ln q off by about theta_rot / (3 T))";
         return Optional.of(new Warning("ROTOR_NOT_CLASSICAL", "the high-temperature rotor form is "
-                + "used where T is below " + (1 / CLASSICAL_ROTOR_LIMIT) + " theta_rot; for a linear rotor "
-                + "prefer \"treatment\": \"level-sum\"", hits));
+                + "used where T is below " + (1 / CLASSICAL_ROTOR_LIMIT) + " theta_rot; " + advice, hits));
     }
 
     private static double[] times(double[] t, double factor) {

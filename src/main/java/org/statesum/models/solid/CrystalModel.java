@@ -92,7 +92,7 @@ public final class CrystalModel {
     }
 
     static List<Warning> warnings(Crystal crystal) {
-        List<Warning> w = screenWarnings(crystal.screen());
+        List<Warning> w = screenWarnings(crystal.screen(), crystal.atomsPerFormulaUnit());
         Crystal.Normalisation norm = crystal.normalisation();
         if (norm != null && norm.applied() && Math.abs(norm.factor() - 1) > Crystals.NORMALISATION_TOLERANCE) {
             w.add(new Warning("DENSITY_RESCALED", "the density of states integrated to " + norm.integral()
@@ -102,16 +102,32 @@ public final class CrystalModel {
         return w;
     }
 
-    /** Warnings for modes left out (they hold at every temperature). */
-    static List<Warning> screenWarnings(ModeScreen s) {
+    /** Six significant digits without trailing zeros. */
+    private static String shown(double x) {
+        return java.math.BigDecimal.valueOf(x).round(new java.math.MathContext(6)).stripTrailingZeros().toPlainString();
+    }
+
+    /**
+     * Warnings for modes left out (they hold at every temperature), with what they cost: m modes left out
+     * of 3 x atoms make C_V tend to (3 x atoms - m) k_B per formula unit at high temperature, not to the
+     * Dulong-Petit 3 x atoms k_B (the zero-frequency acoustic modes at Gamma carry their q-point's weight).
+     */
+    static List<Warning> screenWarnings(ModeScreen s, int atoms) {
         List<Warning> w = new ArrayList<>();
+        double modes = 3.0 * atoms;
+        double left = s.nearZeroModes() + s.smallImaginaryModes();
+        String deficit = left > 0 ? "; at high temperature C_V tends to " + shown(modes - left)
+                + " k_B per formula unit, " + shown((modes - left) / modes) + " of the Dulong-Petit value 3 x atoms k_B = "
+                + shown(modes) + " k_B" : "";
         if (s.nearZeroModes() > 0) {
             w.add(new Warning("ACOUSTIC_MODES_LEFT_OUT", s.nearZeroModes() + " mode(s) per formula unit at or "
-                    + "below the tolerance of " + s.toleranceKelvin() + " K (h nu / k_B) were left out", new double[0]));
+                    + "below the tolerance of " + s.toleranceKelvin() + " K (h nu / k_B) were left out" + deficit,
+                    new double[0]));
         }
         if (s.smallImaginaryModes() > 0) {
             w.add(new Warning("IMAGINARY_MODES_LEFT_OUT", s.smallImaginaryModes() + " imaginary mode(s) per formula "
-                    + "unit within the tolerance were left out as numerical noise", new double[0]));
+                    + "unit within the tolerance were left out as numerical noise"
+                    + (s.nearZeroModes() > 0 ? "" : deficit), new double[0]));
         }
         return w;
     }

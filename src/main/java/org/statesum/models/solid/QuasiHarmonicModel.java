@@ -146,7 +146,7 @@ public final class QuasiHarmonicModel {
     }
 
     private static List<Warning> warnings(QuasiHarmonicCrystal crystal, Map<String, List<Double>> flagged) {
-        List<Warning> out = new ArrayList<>(CrystalModel.screenWarnings(crystal.screen()));
+        List<Warning> out = new ArrayList<>(CrystalModel.screenWarnings(crystal.screen(), crystal.atomsPerFormulaUnit()));
         flagged.forEach((key, temps) -> {
             String[] parts = key.split("\\|", 2);
             String at = parts[1].isEmpty() ? "" : " at P = " + parts[1] + " Pa";

@@ -217,6 +217,23 @@ class IdealGasApiTest {
                 .post("/v1/ideal-gas")
                 .then().statusCode(200)
                 .body("warnings[0].code", equalTo("ROTOR_NOT_CLASSICAL"))
-                .body("warnings[0].temperatures", org.hamcrest.Matchers.contains(100.0));
+                .body("warnings[0].temperatures", org.hamcrest.Matchers.contains(100.0))
+                .body("warnings[0].message", org.hamcrest.Matchers.containsString("\"treatment\": \"level-sum\""));
+    }
+
+    @Test
+    void aNonlinearRotorFlaggedAsNotClassicalIsNotSentToATreatmentItCannotHave() {
+        // water's rotational constants (27.88, 14.51, 9.28 cm-1; recalled from memory) at 5 K
+        server.request().contentType("application/json")
+                .body("""
+                        {"mass": {"value": 18.0106, "unit": "u"}, "rotation": {"kind": "nonlinear",
+                          "rotationalConstants": {"values": [27.88, 14.51, 9.28], "unit": "cm-1"}, "symmetryNumber": 2},
+                         "temperatures": {"values": [5]}}""")
+                .post("/v1/ideal-gas")
+                .then().statusCode(200)
+                .body("warnings.code", org.hamcrest.Matchers.hasItem("ROTOR_NOT_CLASSICAL"))
+                .body("warnings.find { it.code == 'ROTOR_NOT_CLASSICAL' }.message",
+                        org.hamcrest.Matchers.allOf(org.hamcrest.Matchers.containsString("no level sum is offered"),
+                                org.hamcrest.Matchers.not(org.hamcrest.Matchers.containsString("level-sum"))));
     }
 }

@@ -142,4 +142,27 @@ class CrystalApiTest {
             org.junit.jupiter.api.Assertions.assertTrue(bound < 1e-9 * s, "the bound is useful at " + t + " K: " + bound);
         }
     }
+
+    /**
+     * A q-point mesh whose Gamma point has three zero acoustic modes: they are left out, and the answer says
+     * what that costs. Classical limit of the kept modes (common practice): C_V -&gt; (kept modes) k_B, here
+     * (6 - 3 / 4) of the Dulong-Petit 6 k_B for 2 atoms, the Gamma point carrying a quarter of the weight.
+     */
+    @Test
+    void theAcousticModesLeftOutAtGammaAreCountedInTheHighTemperatureLimit() throws Exception {
+        com.fasterxml.jackson.databind.JsonNode answer = new com.fasterxml.jackson.databind.ObjectMapper().readTree(
+                server.request().contentType("application/json")
+                        .body("""
+                        {"atomsPerFormulaUnit": 2, "vibrations": {"model": "phonons", "frequencyUnit": "THz",
+                          "qPoints": [{"weight": 1, "frequencies": [0, 0, 0, 4, 5, 6]},
+                                      {"weight": 3, "frequencies": [1.5, 2, 2.5, 4.2, 5.1, 6.3]}]},
+                         "temperatures": {"values": [1.0e6]}, "outputUnit": "kJ/mol"}""")
+                        .post("/v1/crystal").then().statusCode(200).extract().asString());
+        double cv = answer.at("/isochoricHeatCapacity/values/0").asDouble();
+        // at 1e6 K every kept mode is classical to (theta / T)^2 / 12 < 1e-8 relative
+        org.junit.jupiter.api.Assertions.assertEquals(5.25 * R, cv, 1e-7 * cv);
+        String message = answer.at("/warnings/0/message").asText();
+        org.junit.jupiter.api.Assertions.assertTrue(message.contains("C_V tends to 5.25 k_B per formula unit, 0.875 of"),
+                message);
+    }
 }
