@@ -20,9 +20,11 @@ public final class LevelSet {
     private final double[] logDegeneracies;
     private final boolean logDegeneraciesExact;
     private final double energyRelativeError;
+    /** The degeneracies as given, or null when they came as logarithms. */
+    private final double[] degeneracies;
 
     private LevelSet(double[] energiesKelvin, double[] logDegeneracies, boolean logDegeneraciesExact,
-            double energyRelativeError) {
+            double energyRelativeError, double[] degeneracies) {
         if (energiesKelvin.length == 0) {
             throw new DomainException("EMPTY_LEVEL_SET", "/levels/energies", "the level set is empty");
         }
@@ -44,6 +46,7 @@ public final class LevelSet {
         this.logDegeneracies = logDegeneracies;
         this.logDegeneraciesExact = logDegeneraciesExact;
         this.energyRelativeError = energyRelativeError;
+        this.degeneracies = degeneracies;
     }
 
     /** Levels with degeneracies g_i > 0 (finite reals); ln g_i is formed here. */
@@ -56,21 +59,31 @@ public final class LevelSet {
             }
             logG[i] = Math.log(degeneracies[i]);
         }
-        return new LevelSet(energiesKelvin.clone(), logG, false, 0.0);
+        return new LevelSet(energiesKelvin.clone(), logG, false, 0.0, degeneracies.clone());
     }
 
     /** Levels with log-degeneracies ln g_i given directly (for densities of states beyond 1e308). */
     public static LevelSet ofLogDegeneracies(double[] energiesKelvin, double[] logDegeneracies) {
-        return new LevelSet(energiesKelvin.clone(), logDegeneracies.clone(), true, 0.0);
+        return new LevelSet(energiesKelvin.clone(), logDegeneracies.clone(), true, 0.0, null);
     }
 
     /** A copy whose energies are declared to carry this relative rounding error (>= 0). */
     public LevelSet withEnergyRelativeError(double relativeError) {
-        return new LevelSet(energiesKelvin, logDegeneracies, logDegeneraciesExact, relativeError);
+        return new LevelSet(energiesKelvin, logDegeneracies, logDegeneraciesExact, relativeError, degeneracies);
     }
 
     public int size() {
         return energiesKelvin.length;
+    }
+
+    /** E_i / k_B, K (a copy). */
+    public double[] energiesKelvin() {
+        return energiesKelvin.clone();
+    }
+
+    /** The degeneracies as given (a copy), or null when they were given as logarithms. */
+    public double[] degeneracies() {
+        return degeneracies == null ? null : degeneracies.clone();
     }
 
     double energyKelvin(int i) {
@@ -85,7 +98,7 @@ public final class LevelSet {
         return logDegeneraciesExact;
     }
 
-    double energyRelativeError() {
+    public double energyRelativeError() {
         return energyRelativeError;
     }
 }

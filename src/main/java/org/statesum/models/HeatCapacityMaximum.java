@@ -50,6 +50,9 @@ public record HeatCapacityMaximum(double temperatureKelvin, double temperatureTo
      *         largest C_V at the first or last temperature)
      */
     public static Optional<HeatCapacityMaximum> locate(LevelSet levels, Particles particles, ThermoResult result) {
+        if (particles.statistics().quantum()) {
+            return Optional.empty(); // the search re-evaluates a one-particle table; exact statistics has none
+        }
         double[] t = result.temperaturesKelvin();
         double[] cv = result.series().get(Quantity.ISOCHORIC_HEAT_CAPACITY).values();
         Integer[] order = new Integer[t.length];

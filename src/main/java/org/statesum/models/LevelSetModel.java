@@ -43,6 +43,9 @@ public final class LevelSetModel {
      */
     public static ThermoResult evaluate(LevelSet levels, double[] temperaturesKelvin, Particles particles,
             boolean withPopulations) {
+        if (particles.statistics().quantum()) {
+            return QuantumLevelSetModel.evaluate(levels, temperaturesKelvin, particles);
+        }
         CanonicalTable one = CanonicalEnsemble.evaluate(levels, temperaturesKelvin, withPopulations);
         CanonicalTable table = CompositeSystem.of(one, particles.count(), particles.statistics(),
                 particles.perParticle());
@@ -52,6 +55,9 @@ public final class LevelSetModel {
             diluteWarning(one, particles.count()).ifPresent(warnings::add);
         }
         undefinedLogZ(table).ifPresent(warnings::add);
+        if (particles.statistics() == ParticleStatistics.INDISTINGUISHABLE) {
+            refuseNegativeEntropy(table);
+        }
         Map<String, Object> precision = new LinkedHashMap<>();
         precision.put("arithmetic", "IEEE 754 binary64");
         precision.put("summation", "log-sum-exp about the dominant level; moments about the mean (two-pass); "
@@ -76,7 +82,7 @@ public final class LevelSetModel {
         return kelvin;
     }
 
-    static Map<Quantity, Series> toSi(CanonicalTable table) {
+    public static Map<Quantity, Series> toSi(CanonicalTable table) {
         double k = PhysicalConstants.BOLTZMANN_J_PER_K;
         Map<Quantity, Series> series = new LinkedHashMap<>();
         series.put(Quantity.LOG_PARTITION_FUNCTION, table.logPartitionFunction());
@@ -85,6 +91,24 @@ public final class LevelSetModel {
         series.put(Quantity.ENTROPY, table.entropyOverBoltzmann().scaled(k));
         series.put(Quantity.ISOCHORIC_HEAT_CAPACITY, table.heatCapacityOverBoltzmann().scaled(k));
         return series;
+    }
+
+    /**
+     * Boltzmann counting Z_1^N / N! gives S &lt; 0 where it does not hold (N comparable to or above the
+     * states within reach): such an answer is refused, naming the exact statistics as the way out.
+     */
+    private static void refuseNegativeEntropy(CanonicalTable table) {
+        double[] t = table.temperaturesKelvin();
+        double[] s = table.entropyOverBoltzmann().values();
+        double[] b = table.entropyOverBoltzmann().errorBounds();
+        double[] hits = filter(t, j -> s[j] + b[j] < 0);
+        if (hits.length > 0) {
+            throw new org.statesum.engine.DomainException("BOLTZMANN_COUNTING_INVALID", "/particles/statistics",
+                    "Boltzmann counting (Z_1^N / N!) gives a negative entropy at T = " + java.util.Arrays.toString(hits)
+                            + " K: the particles are far from the dilute limit; count them exactly with "
+                            + "\"bose-einstein\" or \"fermi-dirac\" (integer degeneracies, N up to "
+                            + QuantumLevelSetModel.MAX_PARTICLES + ")");
+        }
     }
 
     private static java.util.Optional<Warning> truncationWarning(CanonicalTable one) {

@@ -12,7 +12,9 @@ public enum Quantity {
     ISOBARIC_HEAT_CAPACITY(Dimension.ENTROPY),
     ZERO_POINT_ENERGY(Dimension.ENERGY),
     /** ln K of a reaction, dimensionless. */
-    LOG_EQUILIBRIUM_CONSTANT(Dimension.NONE);
+    LOG_EQUILIBRIUM_CONSTANT(Dimension.NONE),
+    /** mu = F_N - F_{N-1}, per particle whatever the basis (an intensive quantity). */
+    CHEMICAL_POTENTIAL(Dimension.ENERGY);
 
     /** Dimensionless, energy (J per entity inside models) or entropy and heat capacity (J/K per entity). */
     public enum Dimension { NONE, ENERGY, ENTROPY }
@@ -25,5 +27,13 @@ public enum Quantity {
 
     public Dimension dimension() {
         return dimension;
+    }
+
+    /**
+     * Whether the quantity scales with the amount of substance: a molar unit then divides the total of
+     * N particles by N. The chemical potential is already per particle.
+     */
+    public boolean extensive() {
+        return dimension != Dimension.NONE && this != CHEMICAL_POTENTIAL;
     }
 }

@@ -95,7 +95,7 @@ class AnswerUnitsApiTest {
         // also locates the maximum, which must follow the same convention.
         String system = "{\"levels\": {\"energies\": [0, 1, 2]}, \"energyUnit\": \"kJ/mol\", "
                 + "\"temperatures\": {\"values\": [20, 60, 400]}, "
-                + "\"particles\": {\"count\": 1000, \"statistics\": \"indistinguishable\"}, \"basis\": ";
+                + "\"particles\": {\"count\": 1000, \"statistics\": \"distinguishable\"}, \"basis\": ";
         JsonNode total = post(system + "\"total\"}");
         JsonNode perParticle = post(system + "\"per-particle\"}");
         JsonNode totalEv = post(system + "\"total\", \"outputUnit\": \"eV\"}");

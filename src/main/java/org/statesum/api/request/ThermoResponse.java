@@ -36,7 +36,7 @@ public final class ThermoResponse {
         double perParticle = unit.molar() ? 1.0 / particlesPerEntity : 1.0;
         for (Map.Entry<Quantity, Series> entry : result.series().entrySet()) {
             Series converted = converted(entry.getKey(), entry.getValue(), unit);
-            if (perParticle != 1.0 && entry.getKey().dimension() != Quantity.Dimension.NONE) {
+            if (perParticle != 1.0 && entry.getKey().extensive()) {
                 // One more factor (1/N, rounded) and product: Series.scaled adds their two roundings.
                 converted = converted.scaled(perParticle);
             }
@@ -98,6 +98,7 @@ public final class ThermoResponse {
             case ISOBARIC_HEAT_CAPACITY -> "isobaricHeatCapacity";
             case ZERO_POINT_ENERGY -> "zeroPointEnergy";
             case LOG_EQUILIBRIUM_CONSTANT -> "logEquilibriumConstant";
+            case CHEMICAL_POTENTIAL -> "chemicalPotential";
         };
     }
 

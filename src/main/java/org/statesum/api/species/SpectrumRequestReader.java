@@ -12,8 +12,10 @@ import org.statesum.api.request.TemperatureGridReader;
 import org.statesum.engine.CompositeSystem;
 import org.statesum.engine.LevelSet;
 import org.statesum.engine.ParticleStatistics;
+import org.statesum.engine.QuantumCanonical;
 import org.statesum.models.LevelSetModel;
 import org.statesum.models.Particles;
+import org.statesum.models.QuantumLevelSetModel;
 import org.statesum.units.EnergyUnit;
 
 /** Validates a {@code POST /v1/spectrum} body, collecting every bad field, into a {@link SpectrumJob}. */
@@ -22,7 +24,8 @@ public final class SpectrumRequestReader {
     private static final Set<String> TOP = Set.of("levels", "energyUnit", "temperatures", "particles", "basis",
             "outputUnit", "include");
     private static final Set<String> LEVELS = Set.of("energies", "degeneracies", "logDegeneracies");
-    private static final List<String> STATISTICS = List.of("distinguishable", "indistinguishable");
+    private static final List<String> STATISTICS = List.of("distinguishable", "indistinguishable", "bose-einstein",
+            "fermi-dirac");
     private static final List<String> BASES = List.of("total", "per-particle");
     private static final List<String> INCLUDES = List.of("populations");
 
@@ -50,6 +53,9 @@ public final class SpectrumRequestReader {
         boolean populations = readIncludes(root, fields);
         if (levels.isPresent() && temperatures.isPresent()) {
             checkBudget(levels.get().size(), temperatures.get().length, populations, fields);
+        }
+        if (particles.statistics().quantum()) {
+            checkQuantum(root, levels, temperatures, particles, populations, fields);
         }
         fields.throwIfAny();
         return new SpectrumJob(levels.get(), temperatures.get(), particles, outputUnit.get(), populations);
@@ -156,8 +162,12 @@ public final class SpectrumRequestReader {
         if (fields.hasErrors() || count.isEmpty() || statistics.isEmpty()) {
             return Particles.single();
         }
-        ParticleStatistics kind = statistics.get().equals("indistinguishable")
-                ? ParticleStatistics.INDISTINGUISHABLE : ParticleStatistics.DISTINGUISHABLE;
+        ParticleStatistics kind = switch (statistics.get()) {
+            case "indistinguishable" -> ParticleStatistics.INDISTINGUISHABLE;
+            case "bose-einstein" -> ParticleStatistics.BOSE_EINSTEIN;
+            case "fermi-dirac" -> ParticleStatistics.FERMI_DIRAC;
+            default -> ParticleStatistics.DISTINGUISHABLE;
+        };
         return new Particles(count.getAsDouble(), kind, perParticle);
     }
 
@@ -175,6 +185,48 @@ public final class SpectrumRequestReader {
             populations |= fields.oneOf(node.get(i), "/include/" + i, INCLUDES).isPresent();
         }
         return populations;
+    }
+
+    /**
+     * Exact quantum statistics: integer degeneracies (not logarithms), N within
+     * {@link QuantumLevelSetModel#MAX_PARTICLES} and fermions within the states, the work (temperatures x N x
+     * states, {@link QuantumCanonical#cost}) within the compute budget, and no level populations (not offered).
+     */
+    private void checkQuantum(JsonNode root, Optional<LevelSet> levels, Optional<double[]> temperatures,
+            Particles particles, boolean populations, Fields fields) {
+        if (root.path("levels").has("logDegeneracies")) {
+            fields.add("/levels/logDegeneracies", "exact quantum statistics counts single-particle states: give "
+                    + "integer 'degeneracies'");
+        }
+        if (populations) {
+            fields.add("/include", "level populations are not offered with exact quantum statistics");
+        }
+        if (particles.count() > QuantumLevelSetModel.MAX_PARTICLES) {
+            fields.add("/particles/count", "exact quantum statistics takes at most " + QuantumLevelSetModel.MAX_PARTICLES
+                    + " particles");
+            return;
+        }
+        double[] g = levels.map(LevelSet::degeneracies).orElse(null);
+        if (g == null || temperatures.isEmpty()) {
+            return;
+        }
+        double states = 0;
+        for (int i = 0; i < g.length; i++) {
+            if (!(Math.rint(g[i]) == g[i] && g[i] <= 0x1.0p53)) {
+                fields.add("/levels/degeneracies/" + i, "exact quantum statistics counts single-particle states: a "
+                        + "degeneracy must be a positive integer");
+            }
+            states += g[i];
+        }
+        if (particles.statistics() == ParticleStatistics.FERMI_DIRAC && particles.count() > states) {
+            fields.add("/particles/count", (long) particles.count() + " fermions do not fit into " + (long) states
+                    + " single-particle states (the sum of the degeneracies)");
+        }
+        double work = QuantumCanonical.cost(g, particles.count()) * temperatures.get().length;
+        if (work > config.computeBudget()) {
+            fields.add("/particles/count", "temperatures x particles x states = " + work + " exceeds the compute "
+                    + "budget of " + config.computeBudget() + " (STATESUM_COMPUTE_BUDGET)");
+        }
     }
 
     private void checkBudget(int levels, int temperatures, boolean populations, Fields fields) {

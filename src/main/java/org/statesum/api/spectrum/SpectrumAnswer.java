@@ -64,7 +64,7 @@ public record SpectrumAnswer(ThermoResult result, EnergyUnit unit, Particles par
         for (Map.Entry<Quantity, Series> entry : result.series().entrySet()) {
             // as ThermoResponse.of: the unit conversion, then 1/N for a molar unit
             Series converted = ThermoResponse.converted(entry.getKey(), entry.getValue(), unit);
-            if (perParticle != 1.0 && entry.getKey().dimension() != Quantity.Dimension.NONE) {
+            if (perParticle != 1.0 && entry.getKey().extensive()) {
                 converted = converted.scaled(perParticle);
             }
             gen.writeFieldName(WIRE_NAMES.get(entry.getKey()));
@@ -88,8 +88,12 @@ public record SpectrumAnswer(ThermoResult result, EnergyUnit unit, Particles par
         gen.writeStartObject();
         gen.writeFieldName(PARTICLE_COUNT);
         writeNumber(gen, particles.count());
-        writeString(gen, STATISTICS, particles.statistics() == ParticleStatistics.INDISTINGUISHABLE
-                ? "indistinguishable" : "distinguishable");
+        writeString(gen, STATISTICS, switch (particles.statistics()) {
+            case INDISTINGUISHABLE -> "indistinguishable";
+            case BOSE_EINSTEIN -> "bose-einstein";
+            case FERMI_DIRAC -> "fermi-dirac";
+            case DISTINGUISHABLE -> "distinguishable";
+        });
         writeString(gen, BASIS, particles.perParticle() ? "per-particle" : "total");
         gen.writeEndObject();
         gen.writeFieldName(PRECISION);

@@ -13,7 +13,6 @@ import org.statesum.api.request.JsonSupport;
 import org.statesum.api.request.ThermoResponse;
 import org.statesum.api.species.SpectrumJob;
 import org.statesum.api.species.SpectrumRequestReader;
-import org.statesum.engine.ParticleStatistics;
 import org.statesum.models.HeatCapacityMaximum;
 import org.statesum.models.LevelSetModel;
 import org.statesum.models.ThermoResult;
@@ -37,7 +36,10 @@ class SpectrumAnswerTest {
                 + " \"temperatures\": {\"start\": 0, \"stop\": 1000, \"count\": 41}, \"include\": [\"populations\"]}",
         "{\"levels\": {\"energies\": [1, 250.5, 800], \"logDegeneracies\": [0, 1.5, 2]}, \"energyUnit\": \"cm-1\","
                 + " \"outputUnit\": \"kJ/mol\", \"temperatures\": {\"values\": [0, 10, 300, 5000]},"
-                + " \"particles\": {\"count\": 1000, \"statistics\": \"indistinguishable\"}}",
+                + " \"particles\": {\"count\": 1000, \"statistics\": \"distinguishable\"}}",
+        "{\"levels\": {\"energies\": [1, 250.5, 800], \"degeneracies\": [1, 4, 7]}, \"energyUnit\": \"cm-1\","
+                + " \"outputUnit\": \"kJ/mol\", \"temperatures\": {\"values\": [0, 10, 300, 5000]},"
+                + " \"particles\": {\"count\": 1000, \"statistics\": \"bose-einstein\"}}",
         "{\"levels\": {\"energies\": [0, 2.5]}, \"energyUnit\": \"kcal/mol\", \"temperatures\": {\"start\": 50,"
                 + " \"stop\": 3000, \"count\": 30}, \"particles\": {\"count\": 12, \"statistics\": \"distinguishable\"},"
                 + " \"basis\": \"per-particle\"}"})
@@ -55,8 +57,8 @@ class SpectrumAnswerTest {
                 job.withPopulations());
         Map<String, Object> system = new LinkedHashMap<>();
         system.put("particleCount", job.particles().count());
-        system.put("statistics", job.particles().statistics() == ParticleStatistics.INDISTINGUISHABLE
-                ? "indistinguishable" : "distinguishable");
+        system.put("statistics", job.particles().statistics().name().toLowerCase(java.util.Locale.ROOT)
+                .replace("bose_einstein", "bose-einstein").replace("fermi_dirac", "fermi-dirac"));
         system.put("basis", job.particles().perParticle() ? "per-particle" : "total");
         double particlesPerEntity = job.particles().perParticle() ? 1 : job.particles().count();
         Map<String, Object> answer = ThermoResponse.of(result, job.outputUnit(), system, particlesPerEntity);
