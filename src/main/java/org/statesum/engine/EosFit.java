@@ -31,7 +31,7 @@ public final class EosFit {
     static final double MAX_PRESSURE_DERIVATIVE = 30;
     private static final int MAX_ITERATIONS = 200;
     /** Relative parameter step below which the fit has converged (the Jacobian's own error is ~1e-10). */
-    private static final double STEP_TOLERANCE = 1e-12;
+    static final double STEP_TOLERANCE = 1e-12;
 
     private final EquationOfState eos;
     private final double volumeScale;

@@ -104,24 +104,9 @@ public final class HarmonicModes {
     /** Evaluates the modes on a grid of temperatures (K, each 0 or positive). */
     public VibrationalTable evaluate(double[] temperaturesKelvin) {
         int n = temperaturesKelvin.length;
-        double[][] cols = new double[8][n];
-        // Temperatures are independent: large jobs go over the cores, with bit-identical results.
-        java.util.stream.IntStream range = java.util.stream.IntStream.range(0, n);
-        if ((long) n * theta.length >= PARALLEL_TERMS) {
-            range = range.parallel();
-        }
-        Runnable stop = Cancellation.current();
-        range.forEach(j -> {
-            stop.run(); // a cooperative stop between temperatures (time limit, client gone); see Cancellation
-            double[] out = new double[8];
-            evaluateAt(temperaturesKelvin[j], out);
-            for (int q = 0; q < 8; q++) {
-                cols[q][j] = out[q];
-            }
-        });
-        return new VibrationalTable(temperaturesKelvin.clone(), new Series(cols[0], cols[4]),
-                new Series(cols[1], cols[5]), new Series(cols[2], cols[6]), new Series(cols[3], cols[7]),
-                zeroPoint, zeroPointBound);
+        // temperatures go over the cores when the grid is large (about a millisecond of work or more)
+        boolean parallel = (long) n * theta.length >= PARALLEL_TERMS;
+        return VibrationalTable.tabulate(temperaturesKelvin, parallel, this::evaluateAt, zeroPoint, zeroPointBound);
     }
 
     /**

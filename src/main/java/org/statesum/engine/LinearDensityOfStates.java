@@ -112,23 +112,9 @@ public final class LinearDensityOfStates {
     /** Evaluates the density on a grid of temperatures (K, each 0 or positive). */
     public VibrationalTable evaluate(double[] temperaturesKelvin) {
         int n = temperaturesKelvin.length;
-        double[][] cols = new double[8][n];
-        java.util.stream.IntStream range = java.util.stream.IntStream.range(0, n);
-        if ((long) n * theta.length >= HarmonicModes.PARALLEL_TERMS / 8) {
-            range = range.parallel(); // about eight times the work of a mode per segment
-        }
-        Runnable stop = Cancellation.current();
-        range.forEach(j -> {
-            stop.run();
-            double[] out = new double[8];
-            evaluateAt(temperaturesKelvin[j], out);
-            for (int q = 0; q < 8; q++) {
-                cols[q][j] = out[q];
-            }
-        });
-        return new VibrationalTable(temperaturesKelvin.clone(), new Series(cols[0], cols[4]),
-                new Series(cols[1], cols[5]), new Series(cols[2], cols[6]), new Series(cols[3], cols[7]),
-                zeroPoint, zeroPointBound);
+        // temperatures go over the cores when the grid is large (about a millisecond of work or more)
+        boolean parallel = (long) n * theta.length >= HarmonicModes.PARALLEL_TERMS / 8;
+        return VibrationalTable.tabulate(temperaturesKelvin, parallel, this::evaluateAt, zeroPoint, zeroPointBound);
     }
 
     /** One temperature into {@code out}: F/k, U/k, S/k, C_V/k, then their four bounds. */

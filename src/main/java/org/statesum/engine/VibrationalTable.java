@@ -29,4 +29,37 @@ public record VibrationalTable(
                 heatCapacityOverBoltzmann.scaled(amount), zeroPointEnergyKelvin * amount,
                 zeroPointEnergyBound * amount + 2 * Math.ulp(zeroPointEnergyKelvin * amount));
     }
+
+    /** Thermodynamics at one temperature into {@code out}: F/k, U/k, S/k, C_V/k, then their four bounds. */
+    @FunctionalInterface
+    interface Pointwise {
+        void evaluateAt(double temperatureKelvin, double[] out);
+    }
+
+    /**
+     * The table of {@code f} on a grid, temperature by temperature (over the cores when {@code parallel},
+     * with bit-identical results: the temperatures are independent), stopping cooperatively between
+     * temperatures ({@link Cancellation}).
+     */
+    static VibrationalTable tabulate(double[] temperaturesKelvin, boolean parallel, Pointwise f,
+            double zeroPointKelvin, double zeroPointBound) {
+        int n = temperaturesKelvin.length;
+        double[][] cols = new double[8][n];
+        java.util.stream.IntStream range = java.util.stream.IntStream.range(0, n);
+        if (parallel) {
+            range = range.parallel();
+        }
+        Runnable stop = Cancellation.current();
+        range.forEach(j -> {
+            stop.run();
+            double[] out = new double[8];
+            f.evaluateAt(temperaturesKelvin[j], out);
+            for (int q = 0; q < 8; q++) {
+                cols[q][j] = out[q];
+            }
+        });
+        return new VibrationalTable(temperaturesKelvin.clone(), new Series(cols[0], cols[4]),
+                new Series(cols[1], cols[5]), new Series(cols[2], cols[6]), new Series(cols[3], cols[7]),
+                zeroPointKelvin, zeroPointBound);
+    }
 }

@@ -44,12 +44,20 @@ public final class QuasiHarmonicController implements ComputeEndpoint {
             state.put("pressure", ThermoResponse.measure(job.pressureUnit().symbol(), "value",
                     s.pressurePascal() / pressureScale));
             for (Map.Entry<Quantity, Series> e : s.thermo().entrySet()) {
-                state.put(ThermoResponse.wireName(e.getKey()), ThermoResponse.series(e.getKey(), e.getValue(), unit));
+                Map<String, Object> series = ThermoResponse.series(e.getKey(), e.getValue(), unit);
+                // the estimate in the series' own unit: the conversion of its values, applied to it
+                double factor = ThermoResponse.converted(e.getKey(), new Series(new double[] {1}, new double[] {0}), unit)
+                        .values()[0];
+                series.put(FIT_ESTIMATES, scaled(s.thermoFitEstimates().get(e.getKey()), factor));
+                state.put(ThermoResponse.wireName(e.getKey()), series);
             }
-            state.put("volume", ThermoResponse.wire(job.volumeUnit().symbol(),
-                    s.volumeCubicMetre().scaled(1 / job.volumeUnit().cubicMetresPerUnit())));
-            state.put("bulkModulus", ThermoResponse.wire(job.pressureUnit().symbol(), s.bulkModulusPascal().scaled(1 / pressureScale)));
-            state.put("thermalExpansion", ThermoResponse.wire("1/K", s.thermalExpansionPerKelvin()));
+            double perVolumeUnit = 1 / job.volumeUnit().cubicMetresPerUnit();
+            state.put("volume", withEstimates(ThermoResponse.wire(job.volumeUnit().symbol(),
+                    s.volumeCubicMetre().scaled(perVolumeUnit)), scaled(s.volumeFitEstimate(), perVolumeUnit)));
+            state.put("bulkModulus", withEstimates(ThermoResponse.wire(job.pressureUnit().symbol(),
+                    s.bulkModulusPascal().scaled(1 / pressureScale)), scaled(s.bulkModulusFitEstimate(), 1 / pressureScale)));
+            state.put("thermalExpansion", withEstimates(ThermoResponse.wire("1/K", s.thermalExpansionPerKelvin()),
+                    s.thermalExpansionFitEstimate()));
             states.add(state);
         }
         out.put("states", states);
@@ -69,6 +77,14 @@ public final class QuasiHarmonicController implements ComputeEndpoint {
         out.put("warnings", ThermoResponse.warnings(result.warnings()));
         out.put("provenance", ThermoResponse.provenance());
         return out;
+    }
+
+    /** A series' fit-error estimates (an estimate, not a bound: see the contract). */
+    private static final String FIT_ESTIMATES = "fitErrorEstimates";
+
+    private static Map<String, Object> withEstimates(Map<String, Object> series, double[] estimates) {
+        series.put(FIT_ESTIMATES, estimates);
+        return series;
     }
 
     private static double[] scaled(double[] a, double f) {

@@ -51,7 +51,7 @@ public final class QuasiHarmonicModel {
             double[] pressuresPascal, boolean perAtom) {
         int nt = temperaturesKelvin.length;
         int np = pressuresPascal.length;
-        double[][][] cols = new double[np][18][nt];
+        double[][][] cols = new double[np][ThermoAtMinimum.COLUMNS][nt];
         double[] maxRes = new double[nt];
         double[] rmsRes = new double[nt];
         Map<String, List<Double>> flagged = new LinkedHashMap<>();
@@ -102,8 +102,16 @@ public final class QuasiHarmonicModel {
             thermo.put(Quantity.ENTROPY, new Series(c[6], c[7]).scaled(K / n));
             thermo.put(Quantity.ISOCHORIC_HEAT_CAPACITY, new Series(c[8], c[9]).scaled(K / n));
             thermo.put(Quantity.ISOBARIC_HEAT_CAPACITY, new Series(c[10], c[11]).scaled(K / n));
+            int e = ThermoAtMinimum.ESTIMATES;
+            Map<Quantity, double[]> estimates = new LinkedHashMap<>();
+            Quantity[] order = {Quantity.GIBBS_ENERGY, Quantity.ENTHALPY, Quantity.HELMHOLTZ_ENERGY, Quantity.ENTROPY,
+                Quantity.ISOCHORIC_HEAT_CAPACITY, Quantity.ISOBARIC_HEAT_CAPACITY};
+            for (int k = 0; k < order.length; k++) {
+                estimates.put(order[k], scaledCopy(c[e + k], K / n));
+            }
             states.add(new PressureState(pressuresPascal[q], thermo, new Series(c[12], c[13]).scaled(A3 / n),
-                    new Series(c[14], c[15]).scaled(K / A3), new Series(c[16], c[17])));
+                    new Series(c[14], c[15]).scaled(K / A3), new Series(c[16], c[17]), estimates,
+                    scaledCopy(c[e + 6], A3 / n), scaledCopy(c[e + 7], K / A3), c[e + 8].clone()));
         }
         double[] maxJ = scaledCopy(maxRes, K / n);
         double[] rmsJ = scaledCopy(rmsRes, K / n);
@@ -137,8 +145,10 @@ public final class QuasiHarmonicModel {
                 + "normalised units, started from the previous temperature");
         p.put("minimisation", "Brent root of P_fit(V) = P on the stable branch");
         p.put("entropyAndHeatCapacity", "cubic least squares in V, evaluated (and differentiated) at V(T)");
-        p.put("errorAnalysis", "first-order sensitivity of each answer to the data moved by the largest fit "
-                + "residual plus their own error bounds; not a statistical interval");
+        p.put("errorAnalysis", "errorBounds: first-order sensitivity of each answer to the data moved by their own "
+                + "error bounds (rounding, mode sums), doubled, with the root tolerance and rounding; fitErrorEstimates: "
+                + "the same sensitivity to the data moved by the largest fit residual, doubled: an estimate of how "
+                + "far the equation of state's fit moves the answer, not a bound and not a statistical interval");
         p.put("volumes", crystal.volumesCubicMetre().length);
         p.put("modesSummedPerTemperature", modes);
         p.put("poorFitFraction", POOR_FIT_FRACTION);
