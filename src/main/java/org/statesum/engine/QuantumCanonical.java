@@ -233,6 +233,193 @@ public final class QuantumCanonical {
                 2 * entropyBound, cv, 2 * cvBound, mu, 2 * muBound);
     }
 
+    /**
+     * The fraction of the N particles in each level, n_i / N, at T &gt; 0, and its bounds: {fractions,
+     * bounds}. Bosons: n_i = g_i sum_{k=1..N} x_i^k Z_{N-k} / Z_N, every term positive. Fermions: each
+     * state of level i is occupied with probability x_i Z'_{N-1} / Z_N, Z' the generating function without
+     * that one state, formed as (levels below i) x (1 + x_i t)^{g_i - 1} x (levels above i) from stored
+     * prefix products and a running suffix product, so again only positive terms (the textbook sum over
+     * k alternates for fermions). Work as {@link #cost} (twice for fermions); memory (levels + 1) x (N + 1)
+     * numbers for fermions.
+     */
+    public double[][] populations(double t) {
+        if (t == 0) {
+            return groundPopulations();
+        }
+        int n = particles;
+        int levels = energies.length;
+        double[] lx = new double[levels];
+        double[] lxBound = new double[levels];
+        for (int i = 0; i < levels; i++) {
+            double delta = energies[i] - lowest;
+            lx[i] = -delta / t;
+            lxBound[i] = (Math.abs(energies[i]) + Math.abs(lowest)) * (energyRelativeError + U) / t + 2 * U * Math.abs(lx[i]);
+        }
+        double[] fraction = new double[levels];
+        double[] bound = new double[levels];
+        Runnable stop = Cancellation.current();
+        if (kind == Kind.BOSONS) {
+            double[][] full = {start(n), new double[n + 1]};
+            for (int i = 0; i < levels; i++) {
+                stop.run();
+                times(full, lx[i], lxBound[i], degeneracies[i]);
+            }
+            double[] c = full[0];
+            double[] e = full[1];
+            for (int i = 0; i < levels; i++) {
+                double sum = 0;
+                double err = 0;
+                for (int k = 1; k <= n; k++) {
+                    double exponent = k * lx[i] + c[n - k] - c[n];
+                    double term = Math.exp(exponent);
+                    sum += term;
+                    err += term * (e[n - k] + e[n] + k * lxBound[i] + 3 * U * (Math.abs(exponent) + 1));
+                }
+                fraction[i] = degeneracies[i] * sum / n;
+                bound[i] = 2 * (degeneracies[i] * (err + n * U * sum) / n + 2 * U * fraction[i]);
+            }
+            return new double[][] {fraction, bound};
+        }
+        double[][][] prefix = new double[levels + 1][][];
+        prefix[0] = new double[][] {start(n), new double[n + 1]};
+        for (int i = 0; i < levels; i++) {
+            stop.run();
+            prefix[i + 1] = new double[][] {prefix[i][0].clone(), prefix[i][1].clone()};
+            times(prefix[i + 1], lx[i], lxBound[i], degeneracies[i]);
+        }
+        double cn = prefix[levels][0][n];
+        double en = prefix[levels][1][n];
+        double[][] suffix = {start(n), new double[n + 1]};
+        for (int i = levels - 1; i >= 0; i--) {
+            stop.run();
+            double[][] without = {prefix[i][0].clone(), prefix[i][1].clone()};
+            times(without, lx[i], lxBound[i], degeneracies[i] - 1);
+            // [t^{N-1}] of without x suffix, in logarithms
+            double log = Double.NEGATIVE_INFINITY;
+            double err = 0;
+            for (int k = 0; k <= n - 1; k++) {
+                double term = without[0][k] + suffix[0][n - 1 - k];
+                if (term == Double.NEGATIVE_INFINITY) {
+                    continue;
+                }
+                double hi = Math.max(log, term);
+                double lo = Math.min(log, term);
+                log = lo == Double.NEGATIVE_INFINITY ? hi : hi + Math.log1p(Math.exp(lo - hi));
+                err = Math.max(err, without[1][k] + suffix[1][n - 1 - k]) + U * Math.abs(log) + 3 * U;
+            }
+            double exponent = lx[i] + log - cn;
+            double p = log == Double.NEGATIVE_INFINITY ? 0 : Math.exp(exponent);
+            fraction[i] = degeneracies[i] * p / n;
+            double rel = err + en + lxBound[i] + 3 * U * (Math.abs(exponent) + 1);
+            bound[i] = 2 * (fraction[i] * rel + 2 * U * fraction[i]);
+            times(suffix, lx[i], lxBound[i], degeneracies[i]);
+        }
+        return new double[][] {fraction, bound};
+    }
+
+    /**
+     * T = 0: bosons share the lowest energy's levels, fermions fill the levels from the bottom, the last
+     * energy reached shared among its levels by their states; exact fractions (one rounding each).
+     */
+    private double[][] groundPopulations() {
+        int levels = energies.length;
+        double[] fraction = new double[levels];
+        double left = particles;
+        double e = lowest;
+        while (left > 0) {
+            double states = 0;
+            double next = Double.POSITIVE_INFINITY;
+            for (int i = 0; i < levels; i++) {
+                if (energies[i] == e) {
+                    states += degeneracies[i];
+                } else if (energies[i] > e) {
+                    next = Math.min(next, energies[i]);
+                }
+            }
+            double put = kind == Kind.BOSONS ? left : Math.min(states, left);
+            for (int i = 0; i < levels; i++) {
+                if (energies[i] == e) {
+                    fraction[i] = put * degeneracies[i] / states / particles;
+                }
+            }
+            left -= put;
+            e = next;
+        }
+        double[] bound = new double[levels];
+        for (int i = 0; i < levels; i++) {
+            bound[i] = 4 * U * fraction[i];
+        }
+        return new double[][] {fraction, bound};
+    }
+
+    /** The log coefficients of the constant 1 (and their zero bounds) for degrees 0..n. */
+    private static double[] start(int n) {
+        double[] c = new double[n + 1];
+        java.util.Arrays.fill(c, Double.NEGATIVE_INFINITY);
+        c[0] = 0;
+        return c;
+    }
+
+    /**
+     * Multiplies the log-coefficient array {@code poly[0]} (bounds in {@code poly[1]}) by the factor of
+     * {@code states} single-particle states with ln x = {@code lx}: (1 + x t)^states or (1 - x t)^-states.
+     */
+    private void times(double[][] poly, double lx, double lxBound, double states) {
+        double[] c = poly[0];
+        double[] e = poly[1];
+        int n = c.length - 1;
+        if (states <= n) {
+            for (int s = 0; s < (int) states; s++) {
+                if (kind == Kind.FERMIONS) {
+                    for (int k = n; k >= 1; k--) {
+                        add(c, e, k, c[k - 1] + lx, e[k - 1] + lxBound);
+                    }
+                } else {
+                    for (int k = 1; k <= n; k++) {
+                        add(c, e, k, c[k - 1] + lx, e[k - 1] + lxBound);
+                    }
+                }
+            }
+            return;
+        }
+        double[] c0 = c.clone();
+        double[] e0 = e.clone();
+        double la = 0;
+        double laBound = 0;
+        double[] a = new double[n + 1];
+        double[] ab = new double[n + 1];
+        for (int j = 1; j <= n; j++) {
+            double step = Math.log(kind == Kind.FERMIONS ? (states - j + 1) / j : (states + j - 1) / j);
+            la += step;
+            laBound += U * (3 * Math.abs(step) + 3 + Math.abs(la));
+            a[j] = la;
+            ab[j] = laBound;
+        }
+        for (int k = n; k >= 1; k--) {
+            for (int j = 1; j <= k; j++) {
+                double term = a[j] + j * lx;
+                add(c, e, k, c0[k - j] + term, e0[k - j] + ab[j] + j * lxBound + 2 * U * Math.abs(term));
+            }
+        }
+    }
+
+    /** c_k += e^b in logarithms, with the running bound. */
+    private static void add(double[] c, double[] e, int k, double b, double eb) {
+        if (b == Double.NEGATIVE_INFINITY) {
+            return;
+        }
+        double a = c[k];
+        if (a == Double.NEGATIVE_INFINITY) {
+            c[k] = b;
+            e[k] = eb + U * Math.abs(b);
+            return;
+        }
+        double hi = Math.max(a, b);
+        double sum = hi + Math.log1p(Math.exp(Math.min(a, b) - hi));
+        e[k] = Math.max(e[k], eb) + U * Math.abs(sum) + 3 * U;
+        c[k] = sum;
+    }
+
     /** T = 0: the ground configuration and its number of ways. */
     private Point groundState() {
         Integer[] order = new Integer[energies.length];

@@ -44,7 +44,7 @@ public final class LevelSetModel {
     public static ThermoResult evaluate(LevelSet levels, double[] temperaturesKelvin, Particles particles,
             boolean withPopulations) {
         if (particles.statistics().quantum()) {
-            return QuantumLevelSetModel.evaluate(levels, temperaturesKelvin, particles);
+            return QuantumLevelSetModel.evaluate(levels, temperaturesKelvin, particles, withPopulations);
         }
         CanonicalTable one = CanonicalEnsemble.evaluate(levels, temperaturesKelvin, withPopulations);
         CanonicalTable table = CompositeSystem.of(one, particles.count(), particles.statistics(),

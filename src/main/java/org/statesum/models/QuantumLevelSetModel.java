@@ -20,6 +20,11 @@ public final class QuantumLevelSetModel {
 
     /** Largest N counted exactly: the work per temperature grows as N times the states (see the budget). */
     public static final int MAX_PARTICLES = 1_000_000;
+    /**
+     * Most numbers the fermion populations may hold at once: (levels + 1) x (N + 1) prefix coefficients and
+     * their bounds, 4e6 of each (64 MB).
+     */
+    public static final double MAX_POPULATION_WORKSPACE = 4e6;
 
     private QuantumLevelSetModel() {
     }
@@ -28,7 +33,8 @@ public final class QuantumLevelSetModel {
      * @param levels energies and integer degeneracies (given as degeneracies, not logarithms)
      * @throws DomainException when the degeneracies came as logarithms or N is out of range
      */
-    public static ThermoResult evaluate(LevelSet levels, double[] temperaturesKelvin, Particles particles) {
+    public static ThermoResult evaluate(LevelSet levels, double[] temperaturesKelvin, Particles particles,
+            boolean withPopulations) {
         double[] g = levels.degeneracies();
         if (g == null) {
             throw new DomainException("DEGENERACY_NOT_INTEGRAL", "/levels/logDegeneracies", "exact quantum "
@@ -77,7 +83,18 @@ public final class QuantumLevelSetModel {
                     + "diverges unless the ground configuration has zero energy; reported as null (F, U, S, C_V and "
                     + "the chemical potential keep their limits)", undefined));
         }
-        return new ThermoResult(table.temperaturesKelvin(), si, precision, warnings, null);
+        ThermoResult.Populations populations = null;
+        if (withPopulations) {
+            double[][] values = new double[size][];
+            double[][] bounds = new double[size][];
+            for (int j = 0; j < size; j++) {
+                double[][] p = system.populations(temperaturesKelvin[j]);
+                values[j] = p[0];
+                bounds[j] = p[1];
+            }
+            populations = new ThermoResult.Populations(values, bounds);
+        }
+        return new ThermoResult(table.temperaturesKelvin(), si, precision, warnings, populations);
     }
 
     private static Series scaled(double[] values, double[] bounds, double factor) {

@@ -101,6 +101,86 @@ class QuantumCanonicalTest {
         }
     }
 
+    /** Mean number of particles in each level by enumeration (double sums of a few configurations). */
+    private static double[] bruteOccupations(double[] e, double[] g, int n, boolean fermions, double t) {
+        List<Integer> stateLevel = new ArrayList<>();
+        for (int i = 0; i < e.length; i++) {
+            for (int k = 0; k < g[i]; k++) {
+                stateLevel.add(i);
+            }
+        }
+        double[] occ = new double[e.length];
+        double[] z = new double[1];
+        double emin = Double.POSITIVE_INFINITY;
+        for (double x : e) {
+            emin = Math.min(emin, x);
+        }
+        walk(stateLevel, e, 0, n, fermions, new int[e.length], t, n * emin, occ, z);
+        for (int i = 0; i < occ.length; i++) {
+            occ[i] /= z[0] * n;
+        }
+        return occ;
+    }
+
+    private static void walk(List<Integer> states, double[] e, int from, int left, boolean fermions, int[] counts,
+            double t, double shift, double[] occ, double[] z) {
+        if (left == 0) {
+            double energy = 0;
+            for (int i = 0; i < counts.length; i++) {
+                energy += counts[i] * e[i];
+            }
+            double w = Math.exp(-(energy - shift) / t);
+            z[0] += w;
+            for (int i = 0; i < counts.length; i++) {
+                occ[i] += w * counts[i];
+            }
+            return;
+        }
+        for (int s = from; s < states.size(); s++) {
+            counts[states.get(s)]++;
+            walk(states, e, fermions ? s + 1 : s, left - 1, fermions, counts, t, shift, occ, z);
+            counts[states.get(s)]--;
+        }
+    }
+
+    @Test
+    void levelPopulationsMatchEnumerationAndSumToOne() {
+        Random random = new Random(99);
+        for (int c = 0; c < 24; c++) {
+            boolean fermions = c % 2 == 1;
+            int levels = 2 + random.nextInt(3);
+            double[] e = new double[levels];
+            double[] g = new double[levels];
+            int states = 0;
+            for (int i = 0; i < levels; i++) {
+                e[i] = Math.round(random.nextDouble() * 40) / 10.0;
+                g[i] = 1 + random.nextInt(3);
+                states += (int) g[i];
+            }
+            int n = 1 + random.nextInt(fermions ? states : 4);
+            QuantumCanonical q = QuantumCanonical.of(e, g, n,
+                    fermions ? QuantumCanonical.Kind.FERMIONS : QuantumCanonical.Kind.BOSONS, 0);
+            for (double t : new double[] {0.3, 1, 10}) {
+                double[][] p = q.populations(t);
+                double[] exact = bruteOccupations(e, g, n, fermions, t);
+                double total = 0;
+                for (int i = 0; i < levels; i++) {
+                    // the enumeration's own double sums: 1e-14 of each value on top of the bound
+                    assertEquals(exact[i], p[0][i], p[1][i] + 1e-14 * exact[i] + 1e-300,
+                            (fermions ? "fermions" : "bosons") + " case " + c + " level " + i + " T=" + t);
+                    assertTrue(p[1][i] <= 1e-12 * Math.max(p[0][i], 1e-300) + 1e-300, "bound " + p[1][i]);
+                    total += p[0][i];
+                }
+                assertEquals(1, total, 1e-12);
+            }
+        }
+        // T = 0: 3 fermions on {0 (g 2), 1 (g 3)}: 2/3 at 0, 1/3 at 1
+        double[][] f = QuantumCanonical.of(new double[] {0, 1}, new double[] {2, 3}, 3, QuantumCanonical.Kind.FERMIONS, 0)
+                .populations(0);
+        assertEquals(2.0 / 3, f[0][0], 1e-16);
+        assertEquals(1.0 / 3, f[0][1], 1e-16);
+    }
+
     @Test
     void aLevelWithMoreStatesThanParticlesTakesItsWholeFactorAndAgrees() {
         // 3 particles on levels with 2 and 5 states: the 5-state level goes through the binomial branch

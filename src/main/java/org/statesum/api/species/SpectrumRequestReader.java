@@ -190,7 +190,7 @@ public final class SpectrumRequestReader {
     /**
      * Exact quantum statistics: integer degeneracies (not logarithms), N within
      * {@link QuantumLevelSetModel#MAX_PARTICLES} and fermions within the states, the work (temperatures x N x
-     * states, {@link QuantumCanonical#cost}) within the compute budget, and no level populations (not offered).
+     * states, {@link QuantumCanonical#cost}) within the compute budget, and the fermion populations' workspace.
      */
     private void checkQuantum(JsonNode root, Optional<LevelSet> levels, Optional<double[]> temperatures,
             Particles particles, boolean populations, Fields fields) {
@@ -198,8 +198,10 @@ public final class SpectrumRequestReader {
             fields.add("/levels/logDegeneracies", "exact quantum statistics counts single-particle states: give "
                     + "integer 'degeneracies'");
         }
-        if (populations) {
-            fields.add("/include", "level populations are not offered with exact quantum statistics");
+        if (populations && particles.statistics() == ParticleStatistics.FERMI_DIRAC && levels.isPresent()
+                && (levels.get().size() + 1.0) * (particles.count() + 1) > QuantumLevelSetModel.MAX_POPULATION_WORKSPACE) {
+            fields.add("/include", "fermion populations need (levels + 1) x (N + 1) <= "
+                    + (long) QuantumLevelSetModel.MAX_POPULATION_WORKSPACE + " numbers of workspace");
         }
         if (particles.count() > QuantumLevelSetModel.MAX_PARTICLES) {
             fields.add("/particles/count", "exact quantum statistics takes at most " + QuantumLevelSetModel.MAX_PARTICLES

@@ -47,10 +47,9 @@ class QuantumStatisticsApiTest {
     @Test
     void exactStatisticsNamesEveryFieldItCannotTake() {
         server.request().contentType("application/json")
-                .body(body("{\"energies\": [0, 1], \"degeneracies\": [1, 2.5]}", 7, "fermi-dirac",
-                        ", \"include\": [\"populations\"]"))
+                .body(body("{\"energies\": [0, 1], \"degeneracies\": [1, 2.5]}", 2, "fermi-dirac", ""))
                 .post("/v1/spectrum").then().statusCode(422)
-                .body("errors.pointer", hasItems("/levels/degeneracies/1", "/include"));
+                .body("errors.pointer", hasItems("/levels/degeneracies/1"));
         server.request().contentType("application/json")
                 .body(body("{\"energies\": [0, 1], \"degeneracies\": [1, 2]}", 4, "fermi-dirac", ""))
                 .post("/v1/spectrum").then().statusCode(422)
@@ -64,6 +63,21 @@ class QuantumStatisticsApiTest {
                 .body(body("{\"energies\": [0, 1]}", 2e6, "bose-einstein", ""))
                 .post("/v1/spectrum").then().statusCode(422)
                 .body("errors.pointer", contains("/particles/count"));
+    }
+
+    @Test
+    void populationsAreTheFractionOfTheParticlesInEachLevel() {
+        // 2 fermions on a singly degenerate level 0 and a doubly degenerate level at 1 K, T = 2 K:
+        // Z = 2 x + x^2 with x = e^{-1/2} (one particle up: 2 ways; both up: 1), <n_up> = (2 x + 2 x^2) / Z
+        double x = Math.exp(-0.5);
+        double up = (2 * x + 2 * x * x) / (2 * x + x * x) / 2;
+        server.request().contentType("application/json")
+                .body(body("{\"energies\": [0, 1], \"degeneracies\": [1, 2]}", 2, "fermi-dirac",
+                        ", \"include\": [\"populations\"]"))
+                .post("/v1/spectrum").then().statusCode(200)
+                .body("populations.values[2][1]", closeTo(up, 1e-15))
+                .body("populations.values[2][0]", closeTo(1 - up, 1e-15))
+                .body("populations.values[0][0]", closeTo(0.5, 0));
     }
 
     @Test
