@@ -122,14 +122,7 @@ public final class LinearDensityOfStates {
         double t = temperatureKelvin;
         double eps = thetaRelativeError + U;
         if (t == 0) {
-            out[0] = zeroPoint;
-            out[1] = zeroPoint;
-            out[2] = 0;
-            out[3] = 0;
-            out[4] = zeroPointBound + 2 * eps * zeroPoint;
-            out[5] = out[4];
-            out[6] = 0;
-            out[7] = 0;
+            VibrationalTable.atZeroTemperature(zeroPoint, zeroPointBound + 2 * eps * zeroPoint, out);
             return;
         }
         // sums of the segment integrals int g phi d theta for phi_F, phi_U, phi_C, with their bounds

@@ -30,6 +30,18 @@ public record VibrationalTable(
                 zeroPointEnergyBound * amount + 2 * Math.ulp(zeroPointEnergyKelvin * amount));
     }
 
+    /** The T -&gt; 0 limit into {@code out}: F = U = E_zp (with its bound), S = C_V = 0 exactly. */
+    static void atZeroTemperature(double zeroPoint, double bound, double[] out) {
+        out[0] = zeroPoint;
+        out[1] = zeroPoint;
+        out[2] = 0;
+        out[3] = 0;
+        out[4] = bound;
+        out[5] = bound;
+        out[6] = 0;
+        out[7] = 0;
+    }
+
     /** Thermodynamics at one temperature into {@code out}: F/k, U/k, S/k, C_V/k, then their four bounds. */
     @FunctionalInterface
     interface Pointwise {
