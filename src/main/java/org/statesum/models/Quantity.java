@@ -14,7 +14,9 @@ public enum Quantity {
     /** ln K of a reaction, dimensionless. */
     LOG_EQUILIBRIUM_CONSTANT(Dimension.NONE),
     /** mu = F_N - F_{N-1}, per particle whatever the basis (an intensive quantity). */
-    CHEMICAL_POTENTIAL(Dimension.ENERGY);
+    CHEMICAL_POTENTIAL(Dimension.ENERGY),
+    /** The entropy of mixing the members of an ensemble, -k sum p_i ln(p_i / d_i). */
+    MIXING_ENTROPY(Dimension.ENTROPY);
 
     /** Dimensionless, energy (J per entity inside models) or entropy and heat capacity (J/K per entity). */
     public enum Dimension { NONE, ENERGY, ENTROPY }

@@ -1,8 +1,6 @@
 package org.statesum.api.reaction;
 
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.node.JsonNodeFactory;
-import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
@@ -14,13 +12,10 @@ import java.util.Set;
 import org.statesum.api.config.ServiceConfig;
 import org.statesum.api.request.Fields;
 import org.statesum.api.request.Measures;
-import org.statesum.api.request.ProblemException;
 import org.statesum.api.request.TemperatureGridReader;
-import org.statesum.api.species.SpeciesKind;
+import org.statesum.api.species.SpeciesEntryReader;
 import org.statesum.api.species.SpeciesKinds;
-import org.statesum.engine.DomainException;
 import org.statesum.models.reaction.ReactionSpecies;
-import org.statesum.models.reaction.SpeciesThermo;
 import org.statesum.units.EnergyUnit;
 
 /**
@@ -38,16 +33,13 @@ public final class ReactionRequestReader {
     /** Default absolute tolerance of the root solver, K. */
     static final double DEFAULT_ROOT_TOLERANCE = 1e-6;
 
-    private static final JsonNode STAND_IN_GRID = JsonNodeFactory.instance
-            .objectNode().set("values", JsonNodeFactory.instance.arrayNode()
-                    .add(298.15));
 
     private final ServiceConfig config;
-    private final SpeciesKinds kinds;
+    private final SpeciesEntryReader entries;
 
     ReactionRequestReader(ServiceConfig config, SpeciesKinds kinds) {
         this.config = config;
-        this.kinds = kinds;
+        this.entries = new SpeciesEntryReader(kinds);
     }
 
     ReactionJob read(JsonNode root) {
@@ -84,59 +76,16 @@ public final class ReactionRequestReader {
 
     private Optional<ReactionSpecies> readSpecies(JsonNode node, String p, JsonNode grid, boolean gridGood,
             Set<String> names, Fields fields) {
-        if (!fields.object(node, p, SPECIES)) {
+        Optional<SpeciesEntryReader.Entry> entry = entries.read(node, p, SPECIES, grid, gridGood, names, fields);
+        if (node == null || !node.isObject()) {
             return Optional.empty();
-        }
-        JsonNode nameNode = fields.required(node, "name", p);
-        String name = null;
-        if (nameNode != null && (!nameNode.isTextual() || nameNode.textValue().isBlank())) {
-            fields.add(p + "/name", "must be a non-empty string");
-        } else if (nameNode != null && !names.add(nameNode.textValue())) {
-            fields.add(p + "/name", "another species already has this name");
-        } else if (nameNode != null) {
-            name = nameNode.textValue();
         }
         OptionalDouble nu = fields.number(fields.required(node, "coefficient", p), p + "/coefficient");
         if (nu.isPresent() && nu.getAsDouble() == 0) {
             fields.add(p + "/coefficient", "must not be zero (negative for reactants, positive for products)");
         }
-        Optional<SpeciesKind> kind = fields.oneOf(fields.required(node, "model", p), p + "/model", kinds.names())
-                .flatMap(kinds::find);
-        JsonNode input = fields.required(node, "input", p);
-        if (input != null && !input.isObject()) {
-            fields.add(p + "/input", "must be an object: the body of the model's endpoint, without temperatures");
-            return Optional.empty();
-        }
-        if (input != null) {
-            for (String shared : List.of("temperatures", "outputUnit")) {
-                if (input.has(shared)) {
-                    fields.add(p + "/input/" + shared, "is set once for the whole reaction, at /" + shared);
-                }
-            }
-        }
-        if (kind.isEmpty() || input == null) {
-            return Optional.empty();
-        }
-        ObjectNode withGrid = ((ObjectNode) input).deepCopy();
-        // A species' own grid or output unit was reported above; the rest of its input is still checked.
-        withGrid.remove("outputUnit");
-        // With a bad grid (already reported) the species is still checked, on a stand-in grid.
-        withGrid.set("temperatures", gridGood ? grid : STAND_IN_GRID);
-        try {
-            SpeciesThermo thermo = kind.get().read(withGrid);
-            return name == null || nu.isEmpty() || nu.getAsDouble() == 0 ? Optional.empty()
-                    : Optional.of(new ReactionSpecies(name, nu.getAsDouble(), thermo));
-        } catch (ProblemException e) {
-            e.problem().errors().forEach(err -> fields.add(relocate(err.pointer(), p), err.message()));
-        } catch (DomainException e) {
-            fields.add(relocate(e.field(), p), e.getMessage());
-        }
-        return Optional.empty();
-    }
-
-    /** A pointer inside a species body, as seen from the reaction (the grid belongs to the reaction). */
-    private static String relocate(String pointer, String speciesPointer) {
-        return pointer.startsWith("/temperatures") ? pointer : speciesPointer + "/input" + pointer;
+        return entry.isEmpty() || nu.isEmpty() || nu.getAsDouble() == 0 ? Optional.empty()
+                : Optional.of(new ReactionSpecies(entry.get().name(), nu.getAsDouble(), entry.get().thermo()));
     }
 
     private static Map<String, Object> echo(ReactionSpecies s) {

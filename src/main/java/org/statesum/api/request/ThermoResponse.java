@@ -99,6 +99,7 @@ public final class ThermoResponse {
             case ZERO_POINT_ENERGY -> "zeroPointEnergy";
             case LOG_EQUILIBRIUM_CONSTANT -> "logEquilibriumConstant";
             case CHEMICAL_POTENTIAL -> "chemicalPotential";
+            case MIXING_ENTROPY -> "mixingEntropy";
         };
     }
 

@@ -21,13 +21,18 @@ public final class SpeciesKinds {
 
     private final Map<String, SpeciesKind> kinds = new LinkedHashMap<>();
 
+    /** The reader of ensemble bodies over the standard kinds (for {@code POST /v1/ensemble}). */
+    public static EnsembleReader ensembles(ServiceConfig config) {
+        return new EnsembleReader(standard(config), config);
+    }
+
     /** The kinds served today. */
     public static SpeciesKinds standard(ServiceConfig config) {
         SpectrumRequestReader spectrum = new SpectrumRequestReader(config);
         IdealGasRequestReader gas = new IdealGasRequestReader(config);
         CrystalRequestReader crystal = new CrystalRequestReader(config);
         QuasiHarmonicRequestReader quasiHarmonic = new QuasiHarmonicRequestReader(config);
-        return new SpeciesKinds()
+        SpeciesKinds kinds = new SpeciesKinds()
                 .register("ideal-gas", input -> new IdealGasThermo(gas.read(input).species()))
                 .register("spectrum", input -> {
                     SpectrumJob job = spectrum.read(input);
@@ -42,6 +47,9 @@ public final class SpeciesKinds {
                     }
                     return new QuasiHarmonicThermo(job.crystal(), job.pressuresPascal()[0]);
                 });
+        // an ensemble's members are any kind, an ensemble among them: the reader looks kinds up here
+        EnsembleReader ensembles = new EnsembleReader(kinds, config);
+        return kinds.register("ensemble", ensembles::read);
     }
 
     SpeciesKinds register(String name, SpeciesKind kind) {
