@@ -11,6 +11,7 @@ import org.statesum.api.config.ServiceConfig;
 import org.statesum.api.constants.ConstantsController;
 import org.statesum.api.ensemble.EnsembleController;
 import org.statesum.api.gas.IdealGasController;
+import org.statesum.api.ranking.RankingController;
 import org.statesum.api.reaction.ReactionController;
 import org.statesum.api.request.ComputeEndpoint;
 import org.statesum.api.request.JsonSupport;
@@ -75,6 +76,7 @@ public final class App {
                 .add("/v1/ideal-gas", new IdealGasController(config))
                 .add("/v1/reaction", new ReactionController(config))
                 .add("/v1/ensemble", new EnsembleController(config))
+                .add("/v1/ranking", new RankingController(config))
                 .add("/v1/crystal", new CrystalController(config))
                 .add("/v1/quasi-harmonic", new QuasiHarmonicController(config));
     }

@@ -102,6 +102,7 @@ class ArchitectureTest {
             Map.entry("solid", List.of("config", "request", "species")),
             Map.entry("reaction", List.of("config", "request", "species")),
             Map.entry("ensemble", List.of("config", "request", "species")),
+            Map.entry("ranking", List.of("config", "request", "species")),
             Map.entry("sampled", List.of("config", "request", "species")),
             Map.entry("constants", List.of("config", "request", "species")),
             Map.entry("batch", List.of("config", "request", "species", "server")));
