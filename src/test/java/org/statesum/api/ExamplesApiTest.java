@@ -3,6 +3,7 @@ package org.statesum.api;
 import static org.hamcrest.Matchers.closeTo;
 import static org.hamcrest.Matchers.equalTo;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -23,6 +24,27 @@ class ExamplesApiTest {
         assertEquals(List.of(), ContractValidator.get().validate("SpectrumRequest", body));
         TestServer.shared().request().contentType("application/json").body(body).post("/v1/spectrum")
                 .then().statusCode(200);
+    }
+
+    /** The README's conformer table and ranking (demo scenario: invented molecules, demo values). */
+    @Test
+    void theConformerAndRankingExamplesAnswerWhatTheReadmeSays() throws Exception {
+        String family = Files.readString(Path.of("examples", "kestrel-a-conformers.json"));
+        assertEquals(List.of(), ContractValidator.get().validate("EnsembleRequest", family));
+        TestServer.shared().request().contentType("application/json").body(family).post("/v1/ensemble")
+                .then().statusCode(200)
+                .body("gibbsEnergy.values[1]", closeTo(49.5938, 5e-5))
+                .body("mixingEntropy.values[1]", closeTo(9.9033, 5e-5))
+                .body("populations.values[1][1]", closeTo(0.495, 5e-4));
+        String ranking = Files.readString(Path.of("examples", "kestrel-a-ranking.json"));
+        assertEquals(List.of(), ContractValidator.get().validate("RankingRequest", ranking));
+        TestServer.shared().request().contentType("application/json").body(ranking).post("/v1/ranking")
+                .then().statusCode(200)
+                .body("exchanges[0].temperature", closeTo(321.462, 5e-4))
+                .body("exchanges[0].lowerBelow", equalTo("kestrel-A ring isomer"))
+                .body("ranking[0].mostStable", equalTo("kestrel-A ring isomer"))
+                .body("ranking[12].mostStable", equalTo("kestrel-A family"));
+        assertTrue(Files.readString(Path.of("README.md")).contains("**321.462 K**"));
     }
 
     @Test
